@@ -1,0 +1,36 @@
+#!/usr/bin/env bash
+# `npm test`: install what is missing, start a throwaway PostgreSQL on loopback, build the
+# client, run every test (unit, API against the real database, browser tests in Debian's
+# chromium) and end with a plain "N passed, N failed" line. Extra arguments go to vitest.
+set -euo pipefail
+ROOT=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
+cd "$ROOT"
+source scripts/deps.sh
+source scripts/pg.sh
+
+export PG_TEST_PORT=${PG_TEST_PORT:-54311}
+export TEST_DATABASE_ADMIN_URL="postgres://postgres@127.0.0.1:$PG_TEST_PORT/postgres"
+export NODE_ENV=test
+
+deps_npm
+deps_chromium
+pg_down "$ROOT/.data/pg-test" || true
+rm -rf .data/pg-test .data/pg-test-sock
+pg_up .data/pg-test "$PG_TEST_PORT"
+trap 'pg_down "$ROOT/.data/pg-test"' EXIT
+
+echo "[equilibrist] building the client…"
+npx vite build --logLevel warn
+
+set +e
+npx vitest run --reporter=default --reporter=json --outputFile=.data/vitest.json "$@"
+code=$?
+set -e
+node -e '
+  const fs = require("fs");
+  let r = { numPassedTests: 0, numFailedTests: 0, numPendingTests: 0 };
+  try { r = JSON.parse(fs.readFileSync(".data/vitest.json", "utf8")); } catch {}
+  const failed = r.numFailedTests + (r.numFailedTestSuites || 0) - (r.numFailedTestSuites ? 0 : 0);
+  console.log(`${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests} skipped`);
+'
+exit $code
