@@ -14,10 +14,11 @@ export NODE_ENV=test
 
 deps_npm
 deps_chromium
-pg_down "$ROOT/.data/pg-test" || true
-rm -rf .data/pg-test .data/pg-test-sock
-pg_up .data/pg-test "$PG_TEST_PORT"
-trap 'pg_down "$ROOT/.data/pg-test"' EXIT
+PGT=".data/pg-test-$PG_TEST_PORT"
+pg_down "$ROOT/$PGT" || true
+rm -rf "$PGT" "$PGT-sock"
+pg_up "$PGT" "$PG_TEST_PORT"
+trap 'pg_down "$ROOT/$PGT"' EXIT
 
 echo "[equilibrist] building the client…"
 npx vite build --logLevel warn
