@@ -24,14 +24,17 @@ echo "[equilibrist] building the client…"
 npx vite build --logLevel warn
 
 set +e
-npx vitest run --reporter=default --reporter=json --outputFile=.data/vitest.json "$@"
+npx vitest run --reporter=default --reporter=json --outputFile=.data/vitest-$PG_TEST_PORT.json "$@"
 code=$?
 set -e
 node -e '
+  // A file that fails to load has no failed test but a failed suite: count it as a failure.
   const fs = require("fs");
-  let r = { numPassedTests: 0, numFailedTests: 0, numPendingTests: 0 };
-  try { r = JSON.parse(fs.readFileSync(".data/vitest.json", "utf8")); } catch {}
-  const failed = r.numFailedTests + (r.numFailedTestSuites || 0) - (r.numFailedTestSuites ? 0 : 0);
-  console.log(`${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests} skipped`);
-'
+  let r = { numPassedTests: 0, numFailedTests: 0, numPendingTests: 0, testResults: [] };
+  try { r = JSON.parse(fs.readFileSync(process.argv[1], "utf8")); } catch {}
+  const broken = (r.testResults || []).filter((f) => f.status === "failed" && f.assertionResults.length === 0).length;
+  let failed = r.numFailedTests + broken;
+  if (process.argv[2] !== "0" && failed === 0) failed = 1;
+  console.log(`${r.numPassedTests} passed, ${failed} failed, ${r.numPendingTests} skipped`);
+' ".data/vitest-$PG_TEST_PORT.json" "$code"
 exit $code
