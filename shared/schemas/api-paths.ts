@@ -1,0 +1,65 @@
+/**
+ * API path strings shared by the server (Express route patterns, `apiRoutes`) and the client
+ * (concrete URLs, `apiPaths`). Change a path here and both sides follow.
+ */
+export const apiRoutes = {
+  health: "/api/health",
+  auth: {
+    register: "/api/auth/register",
+    login: "/api/auth/login",
+    logout: "/api/auth/logout",
+    me: "/api/auth/me",
+    forgot: "/api/auth/forgot",
+    reset: "/api/auth/reset",
+  },
+  groups: {
+    list: "/api/groups",
+    detail: "/api/groups/:groupId",
+    invites: "/api/groups/:groupId/invites",
+    invite: "/api/groups/:groupId/invites/:inviteId",
+    member: "/api/groups/:groupId/members/:userId",
+    leave: "/api/groups/:groupId/leave",
+  },
+  invites: {
+    detail: "/api/invites/:token",
+    accept: "/api/invites/:token/accept",
+  },
+  admin: {
+    users: "/api/admin/users",
+    user: "/api/admin/users/:userId",
+    groups: "/api/admin/groups",
+    outbox: "/api/admin/outbox",
+  },
+} as const;
+
+const seg = encodeURIComponent;
+
+/** Concrete URLs for the client (and tests). */
+export const apiPaths = {
+  health: apiRoutes.health,
+  auth: apiRoutes.auth,
+  groups: {
+    list: apiRoutes.groups.list,
+    detail: (groupId: string) => `/api/groups/${seg(groupId)}`,
+    invites: (groupId: string) => `/api/groups/${seg(groupId)}/invites`,
+    invite: (groupId: string, inviteId: string) => `/api/groups/${seg(groupId)}/invites/${seg(inviteId)}`,
+    member: (groupId: string, userId: string) => `/api/groups/${seg(groupId)}/members/${seg(userId)}`,
+    leave: (groupId: string) => `/api/groups/${seg(groupId)}/leave`,
+  },
+  invites: {
+    detail: (token: string) => `/api/invites/${seg(token)}`,
+    accept: (token: string) => `/api/invites/${seg(token)}/accept`,
+  },
+  admin: {
+    users: apiRoutes.admin.users,
+    user: (userId: string) => `/api/admin/users/${seg(userId)}`,
+    groups: apiRoutes.admin.groups,
+    outbox: apiRoutes.admin.outbox,
+  },
+} as const;
+
+/** Client pages that e-mails link to (the server builds `${APP_URL}${page}`). */
+export const pagePaths = {
+  reset: (token: string) => `/reset?token=${seg(token)}`,
+  invite: (token: string) => `/invites/${seg(token)}`,
+} as const;
