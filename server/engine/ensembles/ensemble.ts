@@ -17,7 +17,10 @@ export interface Network {
   jacobian(x: Float64Array, out: Float64Array): void;
   /** Floating-point operations per `rhs` call (for benchmark GFLOP/s figures). */
   readonly rhsFlops: number;
-  /** Typical scale of the state, used to draw random starts and to judge escape. */
+  /**
+   * Typical magnitude of one state component at equilibria (each ensemble documents its
+   * formula), used to draw random starts and to judge escape.
+   */
   readonly stateScale: number;
 }
 
