@@ -1,3 +1,4 @@
+import { balanceMatrix } from "./balance";
 import { reduceToHessenberg } from "./hessenberg";
 import { hessenbergEigenvalues } from "./hessenberg-qr";
 
@@ -29,10 +30,11 @@ export function assertSquareMatrix(a: Float64Array, n: number, name = "a"): void
 }
 
 /**
- * All eigenvalues of a real n×n matrix, without eigenvectors: Householder reduction to upper
- * Hessenberg form (EISPACK orthes) followed by the Francis implicit double-shift QR algorithm
- * (EISPACK hqr; Wilkinson & Reinsch, Handbook for Automatic Computation vol. II, 1971;
- * Golub & Van Loan, Matrix Computations, §7.4–7.5). About 10n³ flops. No balancing is done.
+ * All eigenvalues of a real n×n matrix, without eigenvectors: balancing by powers of 2
+ * (Parlett & Reinsch 1969, EISPACK balanc), Householder reduction to upper Hessenberg form
+ * (EISPACK orthes), then the Francis implicit double-shift QR algorithm (EISPACK hqr;
+ * Wilkinson & Reinsch, Handbook for Automatic Computation vol. II, 1971; Golub & Van Loan,
+ * Matrix Computations, §7.4–7.5). About 10n³ flops.
  * @param a real row-major matrix (index i*n + j), length n*n; not modified
  * @param n the order
  * @returns real and imaginary parts; complex conjugate pairs are adjacent (positive imaginary
@@ -44,6 +46,7 @@ export function eigenvalues(a: Float64Array, n: number): Spectrum {
   const h = Float64Array.from(a);
   const re = new Float64Array(n);
   const im = new Float64Array(n);
+  balanceMatrix(h, n);
   reduceToHessenberg(h, n, new Float64Array(n), new Float64Array(n));
   hessenbergEigenvalues(h, n, re, im);
   return { re, im };
