@@ -1,0 +1,115 @@
+import path from "node:path";
+import connectPgSimple from "connect-pg-simple";
+import express, { type Express } from "express";
+import session from "express-session";
+import helmet from "helmet";
+import type { Database } from "./db/client";
+import { apiNotFound, errorHandler } from "./lib/error-handler";
+import { logger as defaultLogger, type Logger } from "./lib/logger";
+import { originCheck } from "./lib/origin-check";
+import type { Mailer } from "./mail/mailer";
+import { createAdminRouter } from "./modules/admin/admin.router";
+import { createAdminService } from "./modules/admin/admin.service";
+import { createAuthRouter } from "./modules/auth/auth.router";
+import { createAuthService, type AuthLimits } from "./modules/auth/auth.service";
+import { loadActor, SESSION_COOKIE } from "./modules/auth/session";
+import { createGroupsRouter } from "./modules/groups/groups.router";
+import { createGroupsService } from "./modules/groups/groups.service";
+import { createInvitesService } from "./modules/groups/invites.service";
+import { createHealthRouter } from "./modules/health/health.router";
+import { createHealthService } from "./modules/health/health.service";
+
+export interface AppConfig {
+  /** Public origin of the product, e.g. http://127.0.0.1:4310 (links in e-mails, Origin check). */
+  appUrl: string;
+  sessionSecret: string;
+  /** Sign-in and reset rate limits (defaults in auth.service.ts). */
+  authLimits?: Partial<AuthLimits>;
+  /** Largest JSON body accepted (default "1mb"); larger bodies get 413. */
+  bodyLimit?: string;
+  /** Express "trust proxy" setting when a reverse proxy sits in front (default false). */
+  trustProxy?: boolean | number | string;
+}
+
+export interface AppDeps {
+  database: Pick<Database, "db" | "pool">;
+  mailer: Mailer;
+  config: AppConfig;
+  logger?: Logger;
+  /** Built client (dist/): served with an SPA fallback for every non-/api path. */
+  clientDir?: string;
+}
+
+export interface AppHandle {
+  app: Express;
+  /** Stops the session store's pruning timer; the caller closes the database and mailer. */
+  close: () => Promise<void>;
+}
+
+const SESSION_MAX_AGE_MS = 30 * 24 * 60 * 60_000;
+
+/** Builds the Express app (no listen): security middleware, sessions, API routers, errors. */
+export function createApp(deps: AppDeps): AppHandle {
+  const { db, pool } = deps.database;
+  const logger = deps.logger ?? defaultLogger;
+  const { config } = deps;
+  const https = config.appUrl.startsWith("https:");
+
+  const auth = createAuthService({ db, mailer: deps.mailer, appUrl: config.appUrl, logger, limits: config.authLimits });
+  const groups = createGroupsService({ db });
+  const invites = createInvitesService({ db, mailer: deps.mailer, appUrl: config.appUrl, groups });
+  const admin = createAdminService({ db });
+  const health = createHealthService({ db, logger });
+
+  const PgStore = connectPgSimple(session);
+  const store = new PgStore({
+    pool,
+    tableName: "sessions",
+    createTableIfMissing: false,
+    errorLog: (...args: unknown[]) => logger.error("session store", { detail: args.map(String).join(" ") }),
+  });
+
+  const app = express();
+  app.set("trust proxy", config.trustProxy ?? false);
+  app.use(
+    helmet({
+      // Over plain http (loopback) neither HSTS nor upgrading subresources to https makes sense.
+      strictTransportSecurity: https,
+      contentSecurityPolicy: { directives: { upgradeInsecureRequests: https ? [] : null } },
+    }),
+  );
+  app.use(originCheck(config.appUrl));
+  app.use(express.json({ limit: config.bodyLimit ?? "1mb" }));
+  app.use(
+    "/api",
+    session({
+      name: SESSION_COOKIE,
+      secret: config.sessionSecret,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      cookie: { httpOnly: true, sameSite: "lax", secure: https, maxAge: SESSION_MAX_AGE_MS, path: "/" },
+    }),
+    loadActor(auth),
+  );
+
+  app.use(createHealthRouter(health));
+  app.use(createAuthRouter(auth));
+  app.use(createGroupsRouter(groups, invites));
+  app.use(createAdminRouter(admin));
+  app.use("/api", apiNotFound);
+
+  if (deps.clientDir) {
+    const clientDir = path.resolve(deps.clientDir);
+    app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
+    app.get("/{*splat}", (_req, res) => res.sendFile(path.join(clientDir, "index.html")));
+  }
+
+  app.use(errorHandler(logger));
+  return {
+    app,
+    close: async () => {
+      await store.close();
+    },
+  };
+}

@@ -1,0 +1,5 @@
+export * from "./users";
+export * from "./sessions";
+export * from "./groups";
+export * from "./outbox";
+export * from "./rate-limits";
