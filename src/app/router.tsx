@@ -1,0 +1,76 @@
+import { useQueryClient, type QueryClient } from "@tanstack/react-query";
+import { useState } from "react";
+import { createBrowserRouter, redirect, RouterProvider, type RouteObject } from "react-router-dom";
+import { LoadingBlock } from "../components/ui/spinner";
+import { AppShell } from "./layout/app-shell";
+import { RouteError } from "./layout/route-error";
+import { AdminGroupsPage, adminGroupsLoader } from "./routes/admin/admin-groups";
+import { AdminLayout } from "./routes/admin/admin-layout";
+import { AdminOutboxPage, adminOutboxLoader } from "./routes/admin/admin-outbox";
+import { AdminUsersPage, adminUsersLoader } from "./routes/admin/admin-users";
+import { ForgotPasswordPage } from "./routes/auth/forgot-password";
+import { requireAdmin, requireUser, signedOutOnly } from "./routes/auth/guards";
+import { RegisterPage } from "./routes/auth/register";
+import { ResetPasswordPage } from "./routes/auth/reset-password";
+import { SignInPage } from "./routes/auth/sign-in";
+import { GroupDetailPage, groupDetailLoader } from "./routes/groups/group-detail";
+import { GroupsListPage, groupsListLoader } from "./routes/groups/groups-list";
+import { HomePage, homeLoader } from "./routes/home/home";
+import { InvitationPage, invitationLoader } from "./routes/invites/invitation";
+import { NotFoundPage } from "./routes/not-found";
+
+/**
+ * Every page of the client. Signed-out pages sit at the top; the signed-in area shares the
+ * shell (whose loader sends strangers to sign in) and one error boundary inside it, so a
+ * failing page keeps the top bar. Later areas (maps, probes, reports) add children here.
+ */
+export function createRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      id: "root",
+      errorElement: <RouteError fullPage />,
+      hydrateFallbackElement: <LoadingBlock className="min-h-screen" label="Starting Equilibrist…" />,
+      children: [
+        { path: "sign-in", loader: signedOutOnly(queryClient), element: <SignInPage /> },
+        { path: "register", loader: signedOutOnly(queryClient), element: <RegisterPage /> },
+        { path: "forgot-password", element: <ForgotPasswordPage /> },
+        { path: "reset", element: <ResetPasswordPage /> },
+        { path: "invites/:token", loader: invitationLoader(queryClient), element: <InvitationPage /> },
+        {
+          id: "signed-in",
+          loader: requireUser(queryClient),
+          element: <AppShell />,
+          children: [
+            {
+              errorElement: <RouteError />,
+              children: [
+                { index: true, loader: homeLoader(queryClient), element: <HomePage /> },
+                { path: "groups", loader: groupsListLoader(queryClient), element: <GroupsListPage /> },
+                { path: "groups/:groupId", loader: groupDetailLoader(queryClient), element: <GroupDetailPage /> },
+                {
+                  path: "admin",
+                  loader: requireAdmin(queryClient),
+                  element: <AdminLayout />,
+                  children: [
+                    { index: true, loader: () => redirect("/admin/users") },
+                    { path: "users", loader: adminUsersLoader(queryClient), element: <AdminUsersPage /> },
+                    { path: "groups", loader: adminGroupsLoader(queryClient), element: <AdminGroupsPage /> },
+                    { path: "outbox", loader: adminOutboxLoader(queryClient), element: <AdminOutboxPage /> },
+                    { path: "outbox/:messageId", loader: adminOutboxLoader(queryClient), element: <AdminOutboxPage /> },
+                  ],
+                },
+                { path: "*", element: <NotFoundPage /> },
+              ],
+            },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export function AppRouter() {
+  const queryClient = useQueryClient();
+  const [router] = useState(() => createBrowserRouter(createRoutes(queryClient)));
+  return <RouterProvider router={router} />;
+}

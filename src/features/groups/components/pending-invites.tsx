@@ -1,0 +1,42 @@
+import type { GroupInvite } from "../../../../shared/schemas";
+import { ConfirmButton } from "../../../components/ui/confirm-button";
+import { EmptyState } from "../../../components/ui/empty-state";
+import { formatDate } from "../../../lib/format";
+import { useRevokeInvite } from "../api/group-mutations";
+import { RoleBadge } from "./role-badge";
+
+type PendingInvitesProps = { groupId: string; invites: GroupInvite[] };
+
+export function PendingInvites({ groupId, invites }: PendingInvitesProps) {
+  const revoke = useRevokeInvite(groupId);
+  if (invites.length === 0) {
+    return (
+      <EmptyState title="No pending invitations" className="py-8">
+        Invitations you send wait here until they are accepted or expire.
+      </EmptyState>
+    );
+  }
+  return (
+    <ul className="divide-y divide-line">
+      {invites.map((invite) => (
+        <li key={invite.id} className="flex flex-wrap items-center gap-x-4 gap-y-2 px-5 py-3">
+          <div className="min-w-0 flex-1">
+            <p className="truncate text-sm font-medium text-ink">{invite.email}</p>
+            <p className="text-xs text-ink-soft">
+              {invite.invitedByName ? `from ${invite.invitedByName} · ` : ""}expires {formatDate(invite.expiresAt)}
+            </p>
+          </div>
+          <RoleBadge role={invite.role} />
+          <ConfirmButton
+            question="Withdraw?"
+            confirmLabel="Withdraw"
+            busy={revoke.isPending && revoke.variables === invite.id}
+            onConfirm={() => revoke.mutate(invite.id)}
+          >
+            Withdraw
+          </ConfirmButton>
+        </li>
+      ))}
+    </ul>
+  );
+}
