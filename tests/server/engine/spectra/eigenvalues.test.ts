@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import { Matrix, determinant } from "ml-matrix";
 import { describe, expect, it } from "vitest";
 import { createRng } from "../../../../server/engine/random/rng";
-import { countPositive, eigenvalues, maxRealPart } from "../../../../server/engine/spectra/eigenvalues";
+import { countPositive, eigenvalues, maxRealPart, symmetricEigenvalues } from "../../../../server/engine/spectra/eigenvalues";
 
 interface EigenReference {
   source: string;
@@ -156,5 +156,42 @@ describe("eigenvalues: bad input and helpers", () => {
     expect(countPositive(re, 1)).toBe(1);
     expect(() => maxRealPart(new Float64Array(0))).toThrow(RangeError);
     expect(() => countPositive(Float64Array.of(Number.NaN))).toThrow(/re\[0\] is NaN/);
+  });
+});
+
+describe("symmetric path", () => {
+  function symmetricRandom(seed: number, n: number): Float64Array {
+    const a = randomMatrix(seed, n);
+    for (let i = 0; i < n; i++) for (let j = 0; j < i; j++) a[i * n + j] = a[j * n + i];
+    return a;
+  }
+
+  for (const n of [1, 2, 3, 8, 30]) {
+    it(`sum = trace and product = det (ml-matrix) for a random symmetric matrix, n = ${n}`, () => {
+      const a = symmetricRandom(13, n);
+      const { re, im } = eigenvalues(a, n);
+      expect(Array.from(im)).toEqual(new Array(n).fill(0));
+      for (let i = 1; i < n; i++) expect(re[i]).toBeGreaterThanOrEqual(re[i - 1]);
+      let trace = 0;
+      for (let i = 0; i < n; i++) trace += a[i * n + i];
+      expect(re.reduce((s, v) => s + v, 0)).toBeCloseTo(trace, 10);
+      const rows = Array.from({ length: n }, (_, i) => Array.from(a.subarray(i * n, i * n + n)));
+      const det = determinant(new Matrix(rows));
+      expect(Math.abs(re.reduce((p, v) => p * v, 1) - det)).toBeLessThan(1e-9 * Math.abs(det));
+    });
+  }
+
+  it("symmetricEigenvalues(A) equals the general eigenvalues of (A + Aᵀ)/2 perturbed off exact symmetry", () => {
+    const n = 20;
+    const a = randomMatrix(21, n);
+    const sym = symmetricEigenvalues(a, n).re;
+    const s = new Float64Array(n * n);
+    for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) s[i * n + j] = 0.5 * (a[i * n + j] + a[j * n + i]);
+    s[1] *= 1 + 2 ** -50; // breaks exact symmetry so the general QR path runs
+    expect(s[1]).not.toBe(s[n]);
+    const general = eigenvalues(s, n);
+    const sorted = Array.from(general.re).sort((x, y) => x - y);
+    sorted.forEach((v, i) => expect(Math.abs(v - sym[i])).toBeLessThan(1e-10));
+    general.im.forEach((v) => expect(Math.abs(v)).toBeLessThan(1e-6));
   });
 });
