@@ -10,7 +10,14 @@ export function safeNext(search: URLSearchParams | string, fallback = "/"): stri
   return next;
 }
 
-/** "/sign-in?next=%2Fgroups%2F…" for a path to come back to. */
-export function withNext(path: string, next: string): string {
-  return next && next !== "/" ? `${path}?next=${encodeURIComponent(next)}` : path;
+/**
+ * "/sign-in?next=%2Fgroups%2F…" for a path to come back to, optionally carrying the e-mail
+ * address to prefill (an invitation names it).
+ */
+export function withNext(path: string, next: string, email?: string | null): string {
+  const params = new URLSearchParams();
+  if (next && next !== "/") params.set("next", next);
+  if (email) params.set("email", email);
+  const query = params.toString();
+  return query ? `${path}?${query}` : path;
 }

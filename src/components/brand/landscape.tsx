@@ -7,7 +7,7 @@ const HEIGHT = 260;
 const SAMPLES = 240;
 
 function potential(u: number): number {
-  return 0.9 * Math.sin(1.3 * u) + 0.5 * Math.sin(2.9 * u + 1) + 0.28 * Math.sin(5.3 * u + 2);
+  return 0.9 * Math.sin(1.25 * u) + 0.42 * Math.sin(2.6 * u + 1) + 0.1 * Math.sin(5.3 * u + 2);
 }
 
 type Point = { x: number; y: number };

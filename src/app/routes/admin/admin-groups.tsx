@@ -49,7 +49,7 @@ export function AdminGroupsPage() {
           <GroupTable groups={groups.data.items} />
           <div className="border-t border-line">
             <Pager
-              noun="groups"
+              noun="group"
               offset={params.offset ?? 0}
               limit={LIMIT}
               total={groups.data.total}

@@ -63,7 +63,7 @@ export function AdminOutboxPage() {
             <OutboxList messages={items} openId={messageId} linkFor={linkFor} />
             <div className="border-t border-line">
               <Pager
-                noun="e-mails"
+                noun="e-mail"
                 offset={params.offset ?? 0}
                 limit={LIMIT}
                 total={total}

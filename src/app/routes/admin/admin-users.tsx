@@ -51,7 +51,7 @@ export function AdminUsersPage() {
           <UserTable users={users.data.items} myUserId={me.id} />
           <div className="border-t border-line">
             <Pager
-              noun="accounts"
+              noun="account"
               offset={params.offset ?? 0}
               limit={LIMIT}
               total={users.data.total}

@@ -15,7 +15,7 @@ export function RegisterPage() {
       footer={
         <>
           Already have an account?{" "}
-          <Link to={withNext("/sign-in", next)} className="font-medium text-well-600 hover:underline">
+          <Link to={withNext("/sign-in", next, params.get("email"))} className="font-medium text-well-600 hover:underline">
             Sign in
           </Link>
         </>

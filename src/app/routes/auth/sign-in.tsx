@@ -14,7 +14,7 @@ export function SignInPage() {
       footer={
         <>
           New to Equilibrist?{" "}
-          <Link to={withNext("/register", next)} className="font-medium text-well-600 hover:underline">
+          <Link to={withNext("/register", next, params.get("email"))} className="font-medium text-well-600 hover:underline">
             Create an account
           </Link>
         </>

@@ -96,7 +96,7 @@ export function HomePage() {
         title={`Welcome, ${firstName}`}
         description="Equilibrist maps where random networks keep a single stable state, where equilibria multiply, and where stable ones become scarce."
       />
-      <div className="grid gap-6 lg:grid-cols-3">
+      <div className="grid items-start gap-6 lg:grid-cols-3">
         <MapsPanel />
         <GroupsPanel />
       </div>

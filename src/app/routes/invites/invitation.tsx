@@ -10,6 +10,7 @@ import { useCurrentUser } from "../../../features/auth/hooks/use-current-user";
 import { useAcceptInvitation } from "../../../features/groups/api/group-mutations";
 import { groupQueries } from "../../../features/groups/api/group-queries";
 import { InvitationSummary } from "../../../features/groups/components/invitation-summary";
+import { withNext } from "../../../lib/safe-next";
 import { AuthLayout } from "../../layout/auth-layout";
 
 export const invitationLoader =
@@ -23,7 +24,7 @@ export const invitationLoader =
   };
 
 function authLink(path: string, token: string, email: string) {
-  return `${path}?next=${encodeURIComponent(`/invites/${token}`)}&email=${encodeURIComponent(email)}`;
+  return withNext(path, `/invites/${token}`, email);
 }
 
 function SignedOutActions({ token, invitation }: { token: string; invitation: Invitation }) {

@@ -1,0 +1,62 @@
+import { existsSync } from "node:fs";
+import http from "node:http";
+import type { AddressInfo } from "node:net";
+import path from "node:path";
+import { eq } from "drizzle-orm";
+import { createApp, type AppHandle } from "../../server/app";
+import { openDatabase } from "../../server/db/client";
+import { users } from "../../server/db/schema/index";
+import { startFakeSmtp } from "../../server/mail/fake-smtp";
+import { createMailer } from "../../server/mail/mailer";
+import { insertOutboxMessage } from "../../server/mail/outbox.repo";
+import { createTestDatabase } from "./db-template";
+
+/** The built client the product serves; scripts/test.sh builds it before vitest runs. */
+export const DIST_DIR = path.resolve(import.meta.dirname, "../../dist");
+
+/**
+ * The real product for browser tests: createApp with the built client from dist/, on an
+ * ephemeral loopback port, a fresh clone of the migrated test database, and the SMTP fake
+ * (port 0) storing mail in the outbox, exactly as `npm start` wires them.
+ */
+export async function startE2eApp() {
+  if (!existsSync(path.join(DIST_DIR, "index.html"))) {
+    throw new Error("dist/index.html is missing: build the client first (`npx vite build`; `npm test` does it)");
+  }
+  const testDb = await createTestDatabase();
+  const database = openDatabase(testDb.url, { max: 5 });
+  const smtp = await startFakeSmtp({ port: 0, onMessage: (m) => insertOutboxMessage(database.db, m) });
+  const mailer = createMailer({ host: "127.0.0.1", port: smtp.port, from: "Equilibrist <no-reply@equilibrist.test>" });
+
+  const server = http.createServer();
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  const handle: AppHandle = createApp({
+    database,
+    mailer,
+    clientDir: DIST_DIR,
+    config: { appUrl: baseUrl, sessionSecret: "e2e-session-secret-0123456789abcdef" },
+  });
+  server.on("request", handle.app);
+
+  return {
+    baseUrl,
+    /** Gives an existing account the site role admin (the seed does this for the demo lab). */
+    async makeAdmin(email: string): Promise<void> {
+      await database.db.update(users).set({ siteRole: "admin" }).where(eq(users.email, email));
+    },
+    async stop(): Promise<void> {
+      await new Promise<void>((resolve) => {
+        server.close(() => resolve());
+        server.closeAllConnections();
+      });
+      await handle.close();
+      mailer.close();
+      await smtp.close();
+      await database.close();
+      await testDb.drop();
+    },
+  };
+}
+
+export type E2eApp = Awaited<ReturnType<typeof startE2eApp>>;
