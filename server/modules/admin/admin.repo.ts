@@ -10,7 +10,9 @@ interface Page {
   q?: string;
 }
 
-const groupCount = sql<number>`(select count(*)::int from ${groupMembers} m where m.user_id = ${users.id})`;
+// Correlated subqueries name the outer table explicitly (drizzle writes a bare "id" for a column
+// of a single-table select, which inside the subquery would bind to the inner table).
+const groupCount = sql<number>`(select count(*)::int from ${groupMembers} m where m.user_id = ${users}.id)`;
 const adminUserColumns = { id: users.id, email: users.email, name: users.name, siteRole: users.siteRole, createdAt: users.createdAt, groupCount };
 
 /** Users by creation time with the number of groups each belongs to; `q` matches e-mail or name. */
@@ -32,9 +34,9 @@ export async function listUsers(db: Executor, page: Page) {
 /** Groups by name with member count and owners' names; `q` matches the name. */
 export async function listGroups(db: Executor, page: Page) {
   const where = page.q ? ilike(groups.name, containsPattern(page.q)) : undefined;
-  const memberCount = sql<number>`(select count(*)::int from ${groupMembers} m where m.group_id = ${groups.id})`;
+  const memberCount = sql<number>`(select count(*)::int from ${groupMembers} m where m.group_id = ${groups}.id)`;
   const ownerNames = sql<string[]>`coalesce((select array_agg(u.name order by u.name) from ${groupMembers} m
-    join ${users} u on u.id = m.user_id where m.group_id = ${groups.id} and m.role = 'owner'), '{}')`;
+    join ${users} u on u.id = m.user_id where m.group_id = ${groups}.id and m.role = 'owner'), '{}')`;
   const [items, [{ total }]] = await Promise.all([
     db
       .select({ id: groups.id, name: groups.name, createdAt: groups.createdAt, memberCount, ownerNames })

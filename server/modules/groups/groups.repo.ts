@@ -6,7 +6,9 @@ import { groupInvites, groupMembers, groups, users } from "../../db/schema/index
 export type GroupRow = typeof groups.$inferSelect;
 export type InviteRow = typeof groupInvites.$inferSelect;
 
-const memberCount = sql<number>`(select count(*)::int from ${groupMembers} m where m.group_id = ${groups.id})`;
+// Correlated subqueries name the outer table explicitly: drizzle writes a bare "id" for a
+// column of a single-table select, which inside the subquery would bind to the inner table.
+const memberCount = sql<number>`(select count(*)::int from ${groupMembers} m where m.group_id = ${groups}.id)`;
 
 /** Groups the user belongs to (or just `onlyGroupId`), with their role and the member count, by name. */
 export function listGroupsOf(db: Executor, userId: string, onlyGroupId?: string) {
