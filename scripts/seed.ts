@@ -10,8 +10,9 @@ if (!url) {
 const database = openDatabase(url, { max: 2 });
 try {
   const people = await seedDemoLab(database.db);
-  const lines = people.map((p) => `  ${p.email.padEnd(42)} ${DEMO_PASSWORD}   (${p.about}${p.created ? "" : "; kept as it was"})`);
-  process.stdout.write(`[equilibrist] demo lab "${DEMO_GROUP}" — sign in with:\n${lines.join("\n")}\n`);
+  const lines = people.map((p) => `  ${p.email.padEnd(42)} ${DEMO_PASSWORD}   (${p.about})`);
+  const kept = people.some((p) => !p.created) ? "\n  (accounts that already existed were left as they are: a password changed since still applies)" : "";
+  process.stdout.write(`[equilibrist] demo lab "${DEMO_GROUP}" — sign in with:\n${lines.join("\n")}${kept}\n`);
 } finally {
   await database.close();
 }

@@ -31,7 +31,8 @@ cleanup() {
 trap cleanup INT TERM EXIT
 
 node --import tsx scripts/migrate.ts
-node --import tsx scripts/seed.ts
+sign_ins=$(node --import tsx scripts/seed.ts)
+echo "$sign_ins"
 
 hash=$(cat vite.config.ts package-lock.json $(find src shared -type f | sort) | sha256sum | cut -c1-16)
 if [ ! -f dist/.build-hash ] || [ "$(cat dist/.build-hash)" != "$hash" ]; then
@@ -43,4 +44,16 @@ fi
 node --import tsx server/mail/fake-smtp.main.ts & pids+=($!)
 node --import tsx server/index.ts & pids+=($!)
 if [ -f server/worker.ts ]; then node --import tsx server/worker.ts & pids+=($!); fi
+# Repeat the demo sign-ins once the server answers, so they are the last thing on screen.
+node -e '
+  const url = `http://127.0.0.1:${process.env.PORT}/api/health`;
+  const until = Date.now() + 30000;
+  (async () => {
+    while (Date.now() < until) {
+      try { if ((await fetch(url)).ok) process.exit(0); } catch {}
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    process.exit(1);
+  })();
+' && echo "$sign_ins" && echo "[equilibrist] open $APP_URL — Ctrl-C stops the server and the database."
 wait -n "${pids[@]}"
