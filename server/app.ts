@@ -42,11 +42,12 @@ export interface AppDeps {
 
 export interface AppHandle {
   app: Express;
-  /** Stops the session store's pruning timer; the caller closes the database and mailer. */
+  /** Stops the session store's and the rate limits' pruning timers; the caller closes the database and mailer. */
   close: () => Promise<void>;
 }
 
 const SESSION_MAX_AGE_MS = 30 * 24 * 60 * 60_000;
+const PRUNE_INTERVAL_MS = 15 * 60_000;
 
 /** Builds the Express app (no listen): security middleware, sessions, API routers, errors. */
 export function createApp(deps: AppDeps): AppHandle {
@@ -68,6 +69,11 @@ export function createApp(deps: AppDeps): AppHandle {
     createTableIfMissing: false,
     errorLog: (...args: unknown[]) => logger.error("session store", { detail: args.map(String).join(" ") }),
   });
+
+  const prune = setInterval(() => {
+    auth.pruneRateLimits().catch((err: Error) => logger.warn("rate-limit pruning failed", { message: err.message }));
+  }, PRUNE_INTERVAL_MS);
+  prune.unref();
 
   const app = express();
   app.set("trust proxy", config.trustProxy ?? false);
@@ -109,6 +115,7 @@ export function createApp(deps: AppDeps): AppHandle {
   return {
     app,
     close: async () => {
+      clearInterval(prune);
       await store.close();
     },
   };

@@ -10,7 +10,7 @@ import { hashToken, newToken } from "../../lib/tokens";
 import type { Mailer } from "../../mail/mailer";
 import { resetPasswordMail } from "../../mail/templates";
 import * as repo from "./auth.repo";
-import { clearRateLimit, hitRateLimit } from "./rate-limit.repo";
+import { clearRateLimit, hitRateLimit, pruneRateLimits } from "./rate-limit.repo";
 
 export interface RateRule {
   max: number;
@@ -90,6 +90,11 @@ export function createAuthService(deps: AuthServiceDeps) {
     async findActor(userId: string): Promise<Actor | null> {
       const row = await repo.findUserById(db, userId);
       return row ? { id: row.id, email: row.email, name: row.name, siteRole: row.siteRole } : null;
+    },
+
+    /** Drops rate-limit counters whose window has ended (run periodically by the app). */
+    pruneRateLimits(): Promise<number> {
+      return pruneRateLimits(db);
     },
 
     /** E-mails a one-hour reset link when the account exists; answers the same either way. */

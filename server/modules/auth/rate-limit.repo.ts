@@ -1,4 +1,4 @@
-import { eq, sql } from "drizzle-orm";
+import { eq, lt, sql } from "drizzle-orm";
 import type { Executor } from "../../db/client";
 import { rateLimits } from "../../db/schema/index";
 
@@ -24,4 +24,10 @@ export async function hitRateLimit(db: Executor, key: string, windowMs: number):
 
 export async function clearRateLimit(db: Executor, key: string): Promise<void> {
   await db.delete(rateLimits).where(eq(rateLimits.key, key));
+}
+
+/** Deletes counters whose window ended; returns how many. */
+export async function pruneRateLimits(db: Executor): Promise<number> {
+  const rows = await db.delete(rateLimits).where(lt(rateLimits.resetAt, new Date())).returning({ key: rateLimits.key });
+  return rows.length;
 }

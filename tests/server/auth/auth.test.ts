@@ -1,6 +1,7 @@
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { passwordResetTokens, users } from "../../../server/db/schema/index";
+import { pruneRateLimits } from "../../../server/modules/auth/rate-limit.repo";
 import { SESSION_COOKIE } from "../../../server/modules/auth/session";
 import { newPerson, signedInPerson, startTestApp, tokenFromMail, type TestApp } from "../../helpers/test-app";
 
@@ -124,6 +125,10 @@ describe("sign-in rate limits", () => {
       expect((await attempt("other1@lab.example")).status).toBe(401);
       expect((await attempt("other2@lab.example")).status).toBe(401);
       expect((await attempt("other3@lab.example")).status).toBe(429);
+      // Counters whose window ended are pruned; live ones stay.
+      await limited.database.db.execute(sql`update rate_limits set reset_at = now() - interval '1 second' where key like 'login:account:%'`);
+      expect(await pruneRateLimits(limited.database.db)).toBe(3); // the account keys of person, other1, other2 (other3 was refused by the address limit first)
+      expect((await attempt(person.email, person.password)).status).toBe(429); // the address limit still holds
     } finally {
       await limited.stop();
     }

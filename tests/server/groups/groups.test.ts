@@ -99,6 +99,7 @@ describe("invitations", () => {
     expect((await app.client().get(`/api/invites/${"Z".repeat(43)}`)).status).toBe(404);
     expect((await intruder.client.post(`/api/invites/${"Z".repeat(43)}/accept`)).status).toBe(404);
     expect((await app.client().get("/api/invites/short")).status).toBe(422);
+    expect((await intruder.client.post("/api/invites/short/accept")).status).toBe(422);
   });
 
   it("lets editors invite, forbids viewers (403), owners-only for the owner role, 409 for members", async () => {
