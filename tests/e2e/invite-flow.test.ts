@@ -111,7 +111,7 @@ describe("invitation journey in chromium", () => {
   });
 
   it("shows the group to the second account as a viewer", async () => {
-    const header = page.locator("main").getByText("You are");
+    const header = page.locator("main").getByText("Your role");
     await expect.poll(() => header.isVisible()).toBe(true);
     const members = page.getByRole("listitem").filter({ hasText: second.name });
     await expect.poll(() => members.getByText("Viewer").isVisible()).toBe(true);

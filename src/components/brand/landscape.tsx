@@ -40,7 +40,13 @@ export function Landscape({ className }: { className?: string }) {
       {dots.map((d) => (
         <circle key={`${d.x}-${d.y}`} cx={d.x} cy={d.y} r="1.4" className="fill-well-700" />
       ))}
-      <path d={`${PATH} L${WIDTH} ${HEIGHT} L0 ${HEIGHT} Z`} className="fill-well-800/70" />
+      <defs>
+        <linearGradient id="landscape-fill" x1="0" y1="0" x2="0" y2="1">
+          <stop offset="0%" stopColor="#184c5c" stopOpacity="0.75" />
+          <stop offset="100%" stopColor="#184c5c" stopOpacity="0" />
+        </linearGradient>
+      </defs>
+      <path d={`${PATH} L${WIDTH} ${HEIGHT} L0 ${HEIGHT} Z`} fill="url(#landscape-fill)" />
       <path d={PATH} fill="none" strokeWidth="3" strokeLinecap="round" className="stroke-well-300" />
       {LANDSCAPE.maxima.map((p) => (
         <circle key={`max-${p.x}`} cx={p.x} cy={p.y - 9} r="6" fill="none" strokeWidth="2" className="stroke-well-200" />

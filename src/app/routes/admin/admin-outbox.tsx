@@ -38,7 +38,7 @@ export function AdminOutboxPage() {
   const open = messageId ? items.find((m) => m.id === messageId) : undefined;
 
   return (
-    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,23rem)_minmax(0,1fr)]">
+    <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,23rem)_minmax(0,1fr)]">
       <Card className={cn(messageId && "hidden lg:block")}>
         <CardHeader
           title="Outbox"

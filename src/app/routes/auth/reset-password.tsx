@@ -14,9 +14,11 @@ export function ResetPasswordPage() {
       title="Choose a new password"
       subtitle="The link from your e-mail works once, for one hour."
       footer={
-        <Link to="/forgot-password" className="font-medium text-well-600 hover:underline">
-          Request a new link
-        </Link>
+        token ? (
+          <Link to="/forgot-password" className="font-medium text-well-600 hover:underline">
+            Request a new link
+          </Link>
+        ) : undefined
       }
     >
       {token ? (

@@ -46,9 +46,13 @@ export function GroupDetailPage() {
       <PageHeader
         title={g.name}
         description={
-          <span className="inline-flex flex-wrap items-center gap-2">
-            <span>You are</span> <RoleBadge role={g.myRole} />
-            <span>· {plural(g.memberCount, "member")} · created {formatDate(g.createdAt)}</span>
+          <span className="flex flex-wrap items-center gap-x-4 gap-y-1">
+            <span className="inline-flex items-center gap-1.5">
+              Your role <RoleBadge role={g.myRole} />
+            </span>
+            <span>
+              {plural(g.memberCount, "member")} · created {formatDate(g.createdAt)}
+            </span>
           </span>
         }
         actions={
@@ -63,7 +67,7 @@ export function GroupDetailPage() {
           </ConfirmButton>
         }
       />
-      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
+      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <Card>
           <CardHeader title="Members" description={g.myRole === "owner" ? "As owner you can change roles and remove members." : undefined} />
           <MemberList group={g} myUserId={me.id} />

@@ -21,7 +21,7 @@ export function GroupsListPage() {
         title="Your groups"
         description="People who share maps. Owners manage members, editors create maps and invite, viewers read."
       />
-      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-label="Groups you belong to">
           {groups.isPending ? (
             <LoadingBlock />
@@ -36,7 +36,7 @@ export function GroupsListPage() {
               </EmptyState>
             </Card>
           ) : (
-            <div className="grid gap-4 sm:grid-cols-2">
+            <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
               {groups.data.items.map((g) => (
                 <GroupCard key={g.id} group={g} />
               ))}

@@ -35,7 +35,7 @@ function MapsPanel() {
   return (
     <Card className="lg:col-span-2">
       <CardHeader title="Your maps" description="Maps you made, your groups' maps, and maps shared with you." />
-      <CardBody className="grid items-center gap-6 py-8 sm:grid-cols-[minmax(0,1fr)_minmax(0,15rem)]">
+      <CardBody className="grid grid-cols-1 items-center gap-6 py-8 sm:grid-cols-[minmax(0,1fr)_minmax(0,15rem)]">
         <div>
           <h3 className="text-base font-semibold text-ink">No maps yet</h3>
           <p className="mt-1.5 text-sm leading-relaxed text-ink-soft">
@@ -96,7 +96,7 @@ export function HomePage() {
         title={`Welcome, ${firstName}`}
         description="Equilibrist maps where random networks keep a single stable state, where equilibria multiply, and where stable ones become scarce."
       />
-      <div className="grid items-start gap-6 lg:grid-cols-3">
+      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-3">
         <MapsPanel />
         <GroupsPanel />
       </div>
@@ -104,7 +104,7 @@ export function HomePage() {
         <h2 id="what-a-map-shows" className="text-sm font-semibold tracking-[0.12em] text-well-500 uppercase">
           What a map will show
         </h2>
-        <div className="mt-4 grid gap-4 md:grid-cols-3">
+        <div className="mt-4 grid grid-cols-1 gap-4 md:grid-cols-3">
           {EXPLAINERS.map((e, i) => (
             <div key={e.title} className="rounded-[var(--radius-card)] border border-line p-5">
               <p className="font-mono text-xs text-ember-500">0{i + 1}</p>
@@ -113,10 +113,7 @@ export function HomePage() {
             </div>
           ))}
         </div>
-        <p className="mt-4 text-xs text-ink-faint">
-          Counts found by simulation are lower bounds of the true number; every estimate will carry its sample size and
-          confidence interval.
-        </p>
+        <p className="mt-4 text-xs text-ink-faint">Every estimate will carry its sample size and confidence interval.</p>
       </section>
     </>
   );

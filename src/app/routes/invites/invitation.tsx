@@ -71,6 +71,9 @@ function SignedInActions({ token, invitation, user }: { token: string; invitatio
           Switch account
         </Button>
       )}
+      <Link to="/" className="self-center text-sm text-well-600 hover:underline">
+        Not now, go to Equilibrist
+      </Link>
     </div>
   );
 }

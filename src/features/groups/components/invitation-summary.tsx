@@ -15,7 +15,7 @@ export function InvitationSummary({ invitation }: { invitation: Invitation }) {
           {roleLabel[invitation.role]} <span className="text-ink-soft">— {roleDescription[invitation.role]}</span>
         </dd>
         <dt className="text-ink-faint">For</dt>
-        <dd className="break-all text-ink">{invitation.email}</dd>
+        <dd className="text-ink [overflow-wrap:anywhere]">{invitation.email}</dd>
         {invitation.invitedByName && (
           <>
             <dt className="text-ink-faint">From</dt>

@@ -30,26 +30,21 @@ export function InviteForm({ groupId, myRole }: InviteFormProps) {
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-3">
       <FormMessage message={errors.root?.message} />
-      <div className="grid gap-3 sm:grid-cols-[minmax(0,1fr)_11rem]">
-        <TextField
-          label="E-mail address"
-          type="email"
-          autoComplete="off"
-          placeholder="colleague@lab.example"
-          error={errors.email?.message}
-          {...form.register("email")}
-        />
-        <SelectField
-          label="Role"
-          options={roles.map((r) => ({ value: r, label: roleLabel[r] }))}
-          error={errors.role?.message}
-          {...form.register("role")}
-        />
-      </div>
-      <p className="text-xs text-ink-faint">
-        {roles.map((r) => `${roleLabel[r]}: ${roleDescription[r]}`).join(" · ")}.
-      </p>
-      <Button type="submit" busy={invite.isPending} className="self-start">
+      <TextField
+        label="E-mail address"
+        type="email"
+        autoComplete="off"
+        placeholder="colleague@lab.example"
+        error={errors.email?.message}
+        {...form.register("email")}
+      />
+      <SelectField
+        label="Role"
+        options={roles.map((r) => ({ value: r, label: `${roleLabel[r]} — ${roleDescription[r]}` }))}
+        error={errors.role?.message}
+        {...form.register("role")}
+      />
+      <Button type="submit" busy={invite.isPending} className="mt-1 self-start">
         Send invitation
       </Button>
     </form>

@@ -30,7 +30,7 @@ function MemberRow({ groupId, member, isMe, manage }: MemberRowProps) {
   return (
     <li className="flex flex-wrap items-center gap-x-4 gap-y-2 px-5 py-3">
       <Avatar name={member.name} />
-      <div className="min-w-0 flex-1">
+      <div className="min-w-0 flex-1 basis-52">
         <p className="truncate text-sm font-medium text-ink">
           {member.name}
           {isMe && <span className="ml-1.5 text-xs font-normal text-ink-faint">(you)</span>}

@@ -20,13 +20,15 @@ export function PendingInvites({ groupId, invites }: PendingInvitesProps) {
     <ul className="divide-y divide-line">
       {invites.map((invite) => (
         <li key={invite.id} className="flex flex-wrap items-center gap-x-4 gap-y-2 px-5 py-3">
-          <div className="min-w-0 flex-1">
-            <p className="truncate text-sm font-medium text-ink">{invite.email}</p>
-            <p className="text-xs text-ink-soft">
-              {invite.invitedByName ? `from ${invite.invitedByName} · ` : ""}expires {formatDate(invite.expiresAt)}
+          <div className="min-w-0 flex-1 basis-52">
+            <p className="text-sm font-medium text-ink [overflow-wrap:anywhere]">{invite.email}</p>
+            <p className="mt-1 flex flex-wrap items-center gap-x-2 gap-y-1 text-xs text-ink-soft">
+              <RoleBadge role={invite.role} />
+              <span>
+                {invite.invitedByName ? `from ${invite.invitedByName} · ` : ""}expires {formatDate(invite.expiresAt)}
+              </span>
             </p>
           </div>
-          <RoleBadge role={invite.role} />
           <ConfirmButton
             question="Withdraw?"
             confirmLabel="Withdraw"
