@@ -20,45 +20,51 @@ export function requireAdmin(actor: Actor | null | undefined): Actor {
   return me;
 }
 
-export function createAdminService(deps: { db: Db }) {
-  const { db } = deps;
-  return {
-    async listUsers(actor: Actor | null | undefined, query: PageQuery): Promise<AdminUserList> {
-      requireAdmin(actor);
-      const { items, total } = await repo.listUsers(db, query);
-      return { items: items.map((u) => ({ ...u, createdAt: iso(u.createdAt) })), total };
-    },
+/** Site administration: accounts, groups, the outbox. Site admins only. */
+export class AdminService {
+  private readonly db: Db;
 
-    /** Changes a user's site role; the last admin cannot be demoted. */
-    async changeSiteRole(actor: Actor | null | undefined, userId: string, input: ChangeSiteRole): Promise<AdminUser> {
-      requireAdmin(actor);
-      return db.transaction(async (tx) => {
-        const admins = await repo.lockAdmins(tx);
-        const target = await repo.findUser(tx, userId);
-        if (!target) throw new NotFoundError("User not found");
-        if (target.siteRole === "admin" && input.siteRole !== "admin" && admins <= 1) {
-          throw new ConflictError("The site needs at least one admin: make someone else an admin first");
-        }
-        await repo.setSiteRole(tx, userId, input.siteRole);
-        const row = await repo.findAdminUser(tx, userId);
-        if (!row) throw new NotFoundError("User not found");
-        return { ...row, createdAt: iso(row.createdAt) };
-      });
-    },
+  constructor(deps: { db: Db }) {
+    this.db = deps.db;
+  }
 
-    async listGroups(actor: Actor | null | undefined, query: PageQuery): Promise<AdminGroupList> {
-      requireAdmin(actor);
-      const { items, total } = await repo.listGroups(db, query);
-      return { items: items.map((g) => ({ ...g, createdAt: iso(g.createdAt) })), total };
-    },
+  async listUsers(actor: Actor | null | undefined, query: PageQuery): Promise<AdminUserList> {
+    requireAdmin(actor);
+    const { items, total } = await repo.listUsers(this.db, query);
+    return { items: items.map((u) => ({ ...u, createdAt: iso(u.createdAt) })), total };
+  }
 
-    /** The e-mails the local SMTP fake caught, newest first. */
-    async listOutbox(actor: Actor | null | undefined, query: PageQuery): Promise<OutboxList> {
-      requireAdmin(actor);
-      const { items, total } = await listOutboxMessages(db, query);
-      return { items: items.map((m) => ({ ...m, createdAt: iso(m.createdAt) })), total };
-    },
-  };
+  /** Changes a user's site role; the last admin cannot be demoted. */
+  async changeSiteRole(actor: Actor | null | undefined, userId: string, input: ChangeSiteRole): Promise<AdminUser> {
+    requireAdmin(actor);
+    return this.db.transaction(async (tx) => {
+      const admins = await repo.lockAdmins(tx);
+      const target = await repo.findUser(tx, userId);
+      if (!target) throw new NotFoundError("User not found");
+      if (target.siteRole === "admin" && input.siteRole !== "admin" && admins <= 1) {
+        throw new ConflictError("The site needs at least one admin: make someone else an admin first");
+      }
+      await repo.setSiteRole(tx, userId, input.siteRole);
+      const row = await repo.findAdminUser(tx, userId);
+      if (!row) throw new NotFoundError("User not found");
+      return { ...row, createdAt: iso(row.createdAt) };
+    });
+  }
+
+  async listGroups(actor: Actor | null | undefined, query: PageQuery): Promise<AdminGroupList> {
+    requireAdmin(actor);
+    const { items, total } = await repo.listGroups(this.db, query);
+    return { items: items.map((g) => ({ ...g, createdAt: iso(g.createdAt) })), total };
+  }
+
+  /** The e-mails the local SMTP fake caught, newest first. */
+  async listOutbox(actor: Actor | null | undefined, query: PageQuery): Promise<OutboxList> {
+    requireAdmin(actor);
+    const { items, total } = await listOutboxMessages(this.db, query);
+    return { items: items.map((m) => ({ ...m, createdAt: iso(m.createdAt) })), total };
+  }
 }
 
-export type AdminService = ReturnType<typeof createAdminService>;
+export function createAdminService(deps: { db: Db }): AdminService {
+  return new AdminService(deps);
+}

@@ -47,88 +47,98 @@ export function toUser(row: repo.UserRow): User {
   return { id: row.id, email: row.email, name: row.name, siteRole: row.siteRole, createdAt: iso(row.createdAt) };
 }
 
-export function createAuthService(deps: AuthServiceDeps) {
-  const { db } = deps;
-  const limits = { ...defaultAuthLimits, ...deps.limits };
+const TOO_MANY_SIGN_INS = "Too many sign-in attempts; try again later";
+const TOO_MANY_RESETS = "Too many reset requests; try again later";
 
-  async function enforce(key: string, rule: RateRule, message: string): Promise<void> {
-    const { hits, resetAt } = await hitRateLimit(db, key, rule.windowMs);
+/** Accounts, sign-in, password reset. Rules live here; sessions are the router's business. */
+export class AuthService {
+  private readonly db: Db;
+  private readonly limits: AuthLimits;
+
+  constructor(private readonly deps: AuthServiceDeps) {
+    this.db = deps.db;
+    this.limits = { ...defaultAuthLimits, ...deps.limits };
+  }
+
+  private async enforce(key: string, rule: RateRule, message: string): Promise<void> {
+    const { hits, resetAt } = await hitRateLimit(this.db, key, rule.windowMs);
     if (hits > rule.max) {
       throw new RateLimitedError(message, Math.max(1, Math.ceil((resetAt.getTime() - Date.now()) / 1000)));
     }
   }
 
-  return {
-    /** Creates an account (site role member). Throws ConflictError when the e-mail is taken. */
-    async register(input: Register): Promise<User> {
-      const passwordHash = await hashPassword(input.password);
-      const row = await repo.insertUser(db, { email: input.email, name: input.name, passwordHash });
-      if (!row) throw new ConflictError("An account with this e-mail already exists", [{ path: "email", message: "An account with this e-mail already exists" }]);
-      return toUser(row);
-    },
+  /** Creates an account (site role member). Throws ConflictError when the e-mail is taken. */
+  async register(input: Register): Promise<User> {
+    const passwordHash = await hashPassword(input.password);
+    const row = await repo.insertUser(this.db, { email: input.email, name: input.name, passwordHash });
+    if (!row) {
+      const message = "An account with this e-mail already exists";
+      throw new ConflictError(message, [{ path: "email", message }]);
+    }
+    return toUser(row);
+  }
 
-    /** Checks credentials under per-address and per-account limits; the same 401 for a wrong e-mail or password. */
-    async login(input: Login, address: string): Promise<User> {
-      const tooMany = "Too many sign-in attempts; try again later";
-      await enforce(`login:address:${address}`, limits.loginPerAddress, tooMany);
-      await enforce(`login:account:${input.email}`, limits.loginPerAccount, tooMany);
-      const row = await repo.findUserByEmail(db, input.email);
-      const ok = await verifyPassword(row?.passwordHash ?? null, input.password);
-      if (!row || !ok) throw new UnauthenticatedError(WRONG_CREDENTIALS);
-      await clearRateLimit(db, `login:account:${input.email}`);
-      return toUser(row);
-    },
+  /** Checks credentials under per-address and per-account limits; the same 401 for a wrong e-mail or password. */
+  async login(input: Login, address: string): Promise<User> {
+    await this.enforce(`login:address:${address}`, this.limits.loginPerAddress, TOO_MANY_SIGN_INS);
+    await this.enforce(`login:account:${input.email}`, this.limits.loginPerAccount, TOO_MANY_SIGN_INS);
+    const row = await repo.findUserByEmail(this.db, input.email);
+    const ok = await verifyPassword(row?.passwordHash ?? null, input.password);
+    if (!row || !ok) throw new UnauthenticatedError(WRONG_CREDENTIALS);
+    await clearRateLimit(this.db, `login:account:${input.email}`);
+    return toUser(row);
+  }
 
-    /** The signed-in account. */
-    async me(actor: Actor | null | undefined): Promise<User> {
-      const row = await repo.findUserById(db, requireActor(actor).id);
-      if (!row) throw new UnauthenticatedError();
-      return toUser(row);
-    },
+  /** The signed-in account. */
+  async me(actor: Actor | null | undefined): Promise<User> {
+    const row = await repo.findUserById(this.db, requireActor(actor).id);
+    if (!row) throw new UnauthenticatedError();
+    return toUser(row);
+  }
 
-    /** Loads the actor of a session; null when the account no longer exists. */
-    async findActor(userId: string): Promise<Actor | null> {
-      const row = await repo.findUserById(db, userId);
-      return row ? { id: row.id, email: row.email, name: row.name, siteRole: row.siteRole } : null;
-    },
+  /** Loads the actor of a session; null when the account no longer exists. */
+  async findActor(userId: string): Promise<Actor | null> {
+    const row = await repo.findUserById(this.db, userId);
+    return row ? { id: row.id, email: row.email, name: row.name, siteRole: row.siteRole } : null;
+  }
 
-    /** Drops rate-limit counters whose window has ended (run periodically by the app). */
-    pruneRateLimits(): Promise<number> {
-      return pruneRateLimits(db);
-    },
+  /** Drops rate-limit counters whose window has ended (run periodically by the app). */
+  pruneRateLimits(): Promise<number> {
+    return pruneRateLimits(this.db);
+  }
 
-    /** E-mails a one-hour reset link when the account exists; answers the same either way. */
-    async forgot(input: ForgotPassword, address: string): Promise<void> {
-      const tooMany = "Too many reset requests; try again later";
-      await enforce(`forgot:address:${address}`, limits.forgotPerAddress, tooMany);
-      await enforce(`forgot:account:${input.email}`, limits.forgotPerAccount, tooMany);
-      const user = await repo.findUserByEmail(db, input.email);
-      if (!user) return;
-      const { token, hash } = newToken();
-      await repo.insertResetToken(db, { userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TOKEN_TTL_MS) });
-      try {
-        await deps.mailer.send(resetPasswordMail(user, `${deps.appUrl}${pagePaths.reset(token)}`));
-      } catch (err) {
-        // The answer must not depend on the account existing, so a mail failure is logged only.
-        deps.logger.error("reset e-mail could not be sent", { message: (err as Error).message });
+  /** E-mails a one-hour reset link when the account exists; answers the same either way. */
+  async forgot(input: ForgotPassword, address: string): Promise<void> {
+    await this.enforce(`forgot:address:${address}`, this.limits.forgotPerAddress, TOO_MANY_RESETS);
+    await this.enforce(`forgot:account:${input.email}`, this.limits.forgotPerAccount, TOO_MANY_RESETS);
+    const user = await repo.findUserByEmail(this.db, input.email);
+    if (!user) return;
+    const { token, hash } = newToken();
+    await repo.insertResetToken(this.db, { userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TOKEN_TTL_MS) });
+    try {
+      await this.deps.mailer.send(resetPasswordMail(user, `${this.deps.appUrl}${pagePaths.reset(token)}`));
+    } catch (err) {
+      // The answer must not depend on the account existing, so a mail failure is logged only.
+      this.deps.logger.error("reset e-mail could not be sent", { message: (err as Error).message });
+    }
+  }
+
+  /** Sets a new password with a valid, unused, unexpired token; signs the account out everywhere. */
+  async reset(input: ResetPassword): Promise<void> {
+    const passwordHash = await hashPassword(input.password);
+    await this.db.transaction(async (tx) => {
+      const row = await repo.findResetTokenForUpdate(tx, hashToken(input.token));
+      if (!row || row.usedAt !== null || row.expiresAt.getTime() <= Date.now()) {
+        const message = "This reset link is invalid, used or expired; ask for a new one";
+        throw new InvalidError(message, [{ path: "token", message }]);
       }
-    },
-
-    /** Sets a new password with a valid, unused, unexpired token; signs the account out everywhere. */
-    async reset(input: ResetPassword): Promise<void> {
-      const passwordHash = await hashPassword(input.password);
-      await db.transaction(async (tx) => {
-        const row = await repo.findResetTokenForUpdate(tx, hashToken(input.token));
-        if (!row || row.usedAt !== null || row.expiresAt.getTime() <= Date.now()) {
-          const message = "This reset link is invalid, used or expired; ask for a new one";
-          throw new InvalidError(message, [{ path: "token", message }]);
-        }
-        await repo.updatePasswordHash(tx, row.userId, passwordHash);
-        await repo.useResetTokensOf(tx, row.userId);
-        await repo.deleteSessionsOf(tx, row.userId);
-      });
-    },
-  };
+      await repo.updatePasswordHash(tx, row.userId, passwordHash);
+      await repo.useResetTokensOf(tx, row.userId);
+      await repo.deleteSessionsOf(tx, row.userId);
+    });
+  }
 }
 
-export type AuthService = ReturnType<typeof createAuthService>;
+export function createAuthService(deps: AuthServiceDeps): AuthService {
+  return new AuthService(deps);
+}
