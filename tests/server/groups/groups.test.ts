@@ -166,6 +166,20 @@ describe("roles and membership", () => {
     expect((await owner.client.patch(memberUrl(owner.id), { role: "viewer" })).status).toBe(200);
   });
 
+  it("two owners demoting each other at once leave exactly one owner (group row lock)", async () => {
+    const { owner, group } = await groupWithOwner();
+    const second = await addMember(group.id, owner, "owner");
+    const memberUrl = (id: string) => `/api/groups/${group.id}/members/${id}`;
+    const [a, b] = await Promise.all([
+      owner.client.patch(memberUrl(second.id), { role: "viewer" }),
+      second.client.patch(memberUrl(owner.id), { role: "viewer" }),
+    ]);
+    // The later transaction waits for the lock, then finds its actor already demoted.
+    expect([a.status, b.status].sort((x, y) => x - y)).toEqual([200, 403]);
+    const detail = await (a.status === 200 ? owner : second).client.get(`/api/groups/${group.id}`);
+    expect(detail.body.members.filter((m: { role: string }) => m.role === "owner")).toHaveLength(1);
+  });
+
   it("owners remove members; others cannot; the last owner cannot be removed", async () => {
     const { owner, group } = await groupWithOwner();
     const editor = await addMember(group.id, owner, "editor");
