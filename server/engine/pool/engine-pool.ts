@@ -1,0 +1,70 @@
+import { availableParallelism } from "node:os";
+import { Piscina } from "piscina";
+import type { CellInput, CellResult } from "../../../shared/schemas/cell-result";
+import { validateCellInput } from "../cell/cell-input";
+import { mergeNetworks } from "../cell/merge";
+import type { NetworkOutput } from "../cell/run-network";
+import type { NetworkTask } from "./network.worker";
+
+export interface EnginePoolOptions {
+  /** Worker threads. Default: every core (os.availableParallelism()). */
+  threads?: number;
+}
+
+/** A pool of worker threads that run networks of cells. */
+export interface EnginePool {
+  readonly threads: number;
+  /** Runs one network task in a worker. */
+  run(task: NetworkTask): Promise<NetworkOutput>;
+  /** Stops the workers. */
+  close(): Promise<void>;
+}
+
+/** Worker flags: the TypeScript loader is added when this process does not already carry it. */
+function workerExecArgv(isTypeScript: boolean): string[] {
+  const argv = process.execArgv;
+  const hasTsx = argv.some((a) => a.includes("tsx"));
+  return isTypeScript && !hasTsx ? [...argv, "--import", "tsx"] : [...argv];
+}
+
+/**
+ * Creates a piscina (5.3) pool whose workers run `runNetwork` (pool/network.worker). Under tsx
+ * the workers inherit the loader; elsewhere (vitest) "--import tsx" is added for the .ts worker.
+ * @param options threads (default: all cores)
+ * @returns the pool; call close() when done
+ * @throws RangeError when threads is not a positive integer
+ */
+export function createEnginePool(options: EnginePoolOptions = {}): EnginePool {
+  const threads = options.threads ?? availableParallelism();
+  if (!Number.isSafeInteger(threads) || threads < 1) throw new RangeError(`threads must be a positive integer, got ${threads}`);
+  const isTypeScript = import.meta.url.endsWith(".ts");
+  const filename = new URL(`./network.worker.${isTypeScript ? "ts" : "js"}`, import.meta.url).href;
+  const piscina = new Piscina<NetworkTask, NetworkOutput>({
+    filename,
+    minThreads: threads,
+    maxThreads: threads,
+    execArgv: workerExecArgv(isTypeScript),
+  });
+  return {
+    threads,
+    run: (task) => piscina.run(task),
+    close: () => piscina.destroy(),
+  };
+}
+
+/**
+ * Computes one cell with the networks spread over the pool's threads (one task per network, so
+ * the queue balances uneven networks) and merges them in network order: the result equals
+ * runCell's except `timing`.
+ * @param pool an engine pool
+ * @param input the cell input (validated here)
+ * @returns the CellResult
+ * @throws TypeError/RangeError on a bad input; rejects when a worker fails
+ */
+export async function runCellParallel(pool: EnginePool, input: CellInput): Promise<CellResult> {
+  const t0 = performance.now();
+  const valid = validateCellInput(input);
+  const tasks = Array.from({ length: valid.budget.networks }, (_, k) => pool.run({ input: valid, k }));
+  const outputs = await Promise.all(tasks);
+  return mergeNetworks(valid, outputs, { wallSeconds: (performance.now() - t0) / 1000, threads: pool.threads });
+}
