@@ -33,13 +33,15 @@ export class RunHistory {
   }
 
   /**
-   * Still converging: the largest speed fell by more than 2× from each of the last three
-   * eighths of the run to the next (‖dx/dt‖ decreasing).
+   * Still converging: over the last three eighths of the second half that hold a step, the
+   * largest speed fell by more than 10 % from each to the next (‖dx/dt‖ decreasing; a periodic
+   * orbit repeats its maxima).
    */
   decreasing(): boolean {
-    const s = this.speedMax;
-    const k = SPEED_BINS - 1;
-    return s[k] > 0 && s[k] < 0.5 * s[k - 1] && s[k - 1] < 0.5 * s[k - 2];
+    const seen = Array.from(this.speedMax).filter((v, i) => v > 0 && i >= SPEED_BINS / 2);
+    if (seen.length < 3) return false;
+    const [a, b, c] = seen.slice(-3);
+    return c < 0.9 * b && b < 0.9 * a;
   }
 
   /**
