@@ -30,6 +30,11 @@ export const apiRoutes = {
     groups: "/api/admin/groups",
     outbox: "/api/admin/outbox",
   },
+  theory: {
+    field: "/api/theory/field",
+    rate: "/api/theory/rate",
+    boundary: "/api/theory/boundary",
+  },
 } as const;
 
 const seg = encodeURIComponent;
@@ -56,6 +61,7 @@ export const apiPaths = {
     groups: apiRoutes.admin.groups,
     outbox: apiRoutes.admin.outbox,
   },
+  theory: apiRoutes.theory,
 } as const;
 
 /** Client pages that e-mails link to (the server builds `${APP_URL}${page}`). */
