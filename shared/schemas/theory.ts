@@ -79,3 +79,102 @@ export const theoryColumnsSchema = z.object({
   rateLines: rateLinesSchema.nullable(),
 });
 export type TheoryColumns = z.infer<typeof theoryColumnsSchema>;
+
+// ——— Public theory API (GET /api/theory/…): query and answer contracts ———
+
+/** Largest N the field route accepts (its Monte Carlo costs ~samples·10N³ flops). */
+export const THEORY_API_MAX_N = 200;
+/** Budget samples·N³ of one field request (32 matrices at N = 200, about 2 s on one core). */
+export const THEORY_API_COST_LIMIT = 32 * 200 ** 3;
+
+const positive = (name: string) =>
+  z.coerce.number({ error: `${name} must be a number` }).refine((v) => Number.isFinite(v) && v > 0, `${name} must be > 0`);
+const tauQuery = z.coerce.number({ error: "tau must be a number" }).min(0, "tau must be in [0, 1]").max(1, "tau must be in [0, 1]");
+const unitsQuery = (most: number) =>
+  z.coerce
+    .number({ error: "N must be a number" })
+    .int("N must be a positive integer")
+    .min(1, "N must be a positive integer")
+    .max(most, `N must be at most ${most}`);
+
+/** GET /api/theory/field?N=&mu=&tau=&sigma=&samples=&seed= */
+export const fieldTheoryQuerySchema = z
+  .object({
+    N: unitsQuery(THEORY_API_MAX_N),
+    mu: positive("mu"),
+    tau: tauQuery,
+    sigma: positive("sigma").default(1),
+    samples: z.coerce.number().int().min(2).max(256).default(32),
+    seed: z.coerce.number().int().min(0).max(2 ** 31 - 1).default(1),
+  })
+  .superRefine((q, ctx) => {
+    if (q.samples * q.N ** 3 > THEORY_API_COST_LIMIT) {
+      const most = Math.max(2, Math.floor(THEORY_API_COST_LIMIT / q.N ** 3));
+      ctx.addIssue({ code: "custom", path: ["samples"], message: `At N = ${q.N} at most ${most} samples` });
+    }
+  });
+export type FieldTheoryQuery = z.infer<typeof fieldTheoryQuerySchema>;
+
+export const fieldTheoryResponseSchema = z.object({
+  N: z.number().int(),
+  mu: z.number(),
+  tau: z.number(),
+  sigma: z.number(),
+  m: z.number(),
+  muC: z.number(),
+  sigmaTotal: z.number(),
+  sigmaStable: z.number().nullable(),
+  regime: regimeSchema,
+  mStable: z.number(),
+  typicalIndexShare: z.number(),
+  finiteN: finiteNKacRiceSchema,
+  /** What each part is: asymptotic (large N) or finite-N, with sources. */
+  labels: z.record(z.string(), z.string()),
+});
+export type FieldTheoryResponse = z.infer<typeof fieldTheoryResponseSchema>;
+
+/** GET /api/theory/rate?N=&mu=&tau=&g= */
+export const rateTheoryQuerySchema = z.object({
+  N: unitsQuery(1_000_000),
+  mu: positive("mu"),
+  tau: tauQuery,
+  g: positive("g"),
+});
+export type RateTheoryQuery = z.infer<typeof rateTheoryQuerySchema>;
+
+export const rateTheoryResponseSchema = z.object({
+  N: z.number().int(),
+  mu: z.number(),
+  tau: z.number(),
+  g: z.number(),
+  muC: z.number(),
+  m: z.number(),
+  originStabilityMu: z.number(),
+  originStable: z.boolean(),
+  gain: z.number(),
+  ellipse: z.object({ real: z.number(), imag: z.number() }),
+  expectedRealEigenvalues: z.number(),
+  lines: z.array(
+    z.object({
+      id: z.enum(["origin-stability", "chaos-onset"]),
+      mu: z.number().nullable(),
+      status: z.enum(["published", "recalled-unconfirmed", "not-applicable"]),
+      label: z.string(),
+    }),
+  ),
+  /** What each part is (asymptotic, with sources). */
+  labels: z.record(z.string(), z.string()),
+});
+export type RateTheoryResponse = z.infer<typeof rateTheoryResponseSchema>;
+
+/** GET /api/theory/boundary?tau= */
+export const boundaryQuerySchema = z.object({ tau: tauQuery });
+export type BoundaryQuery = z.infer<typeof boundaryQuerySchema>;
+
+export const boundaryResponseSchema = z.object({
+  tau: z.number(),
+  mStable: z.number(),
+  /** ln m_st(τ), finite where m_st underflows; null at τ = 0 (−∞). */
+  logMStable: z.number().nullable(),
+});
+export type BoundaryResponse = z.infer<typeof boundaryResponseSchema>;
