@@ -18,6 +18,7 @@ import { createGroupsService } from "./modules/groups/groups.service";
 import { createInvitesService } from "./modules/groups/invites.service";
 import { createHealthRouter } from "./modules/health/health.router";
 import { createHealthService } from "./modules/health/health.service";
+import { createTheoryRouter } from "./modules/theory/theory.router";
 
 export interface AppConfig {
   /** Public origin of the product, e.g. http://127.0.0.1:4310 (links in e-mails, Origin check). */
@@ -103,6 +104,7 @@ export function createApp(deps: AppDeps): AppHandle {
   app.use(createAuthRouter(auth));
   app.use(createGroupsRouter(groups, invites));
   app.use(createAdminRouter(admin));
+  app.use(createTheoryRouter());
   app.use("/api", apiNotFound);
 
   if (deps.clientDir) {
