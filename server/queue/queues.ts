@@ -1,0 +1,32 @@
+import { z } from "zod";
+
+/**
+ * pg-boss queue names beside their payload schemas. Payloads are validated when dequeued.
+ * - fill-cell: compute (or take from the cache) one grid position of one map.
+ * - theory-row: compute the theory columns of one τ row (Kac–Rice eigenvalues reused across μ).
+ * - map-finished: follow-up work when a map completes (e-mail to the owner).
+ */
+export const FILL_CELL_QUEUE = "fill-cell";
+export const THEORY_ROW_QUEUE = "theory-row";
+export const MAP_FINISHED_QUEUE = "map-finished";
+
+export const fillCellPayloadSchema = z.object({
+  mapId: z.uuid(),
+  i: z.number().int().min(0),
+  j: z.number().int().min(0),
+  cellKey: z.string().min(16),
+});
+export type FillCellPayload = z.infer<typeof fillCellPayloadSchema>;
+
+export const theoryRowPayloadSchema = z.object({
+  theoryKey: z.string().min(16),
+  ensemble: z.string(),
+  params: z.object({ N: z.number().int().positive(), sigma: z.number().optional(), g: z.number().optional() }),
+  tau: z.number().min(0).max(1),
+  mus: z.array(z.number().positive()).min(1),
+  kacRice: z.object({ samples: z.number().int().min(2), seed: z.number().int().min(0) }).optional(),
+});
+export type TheoryRowPayload = z.infer<typeof theoryRowPayloadSchema>;
+
+export const mapFinishedPayloadSchema = z.object({ mapId: z.uuid() });
+export type MapFinishedPayload = z.infer<typeof mapFinishedPayloadSchema>;
