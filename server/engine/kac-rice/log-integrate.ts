@@ -28,6 +28,22 @@ function pieceEnds(lo: number, hi: number, breaks: readonly number[], h: number)
   return ends;
 }
 
+/** Largest of L at the ends and midpoint of every piece, and the overall largest. */
+function coarseScan(logf: (w: number) => number, ends: number[]): { coarse: Float64Array; top: number } {
+  const coarse = new Float64Array(ends.length - 1);
+  let top = -Infinity;
+  let left = logf(ends[0]);
+  for (let p = 0; p < coarse.length; p++) {
+    const right = logf(ends[p + 1]);
+    const mid = logf(0.5 * (ends[p] + ends[p + 1]));
+    if (Number.isNaN(left) || Number.isNaN(mid) || Number.isNaN(right)) throw new RangeError("logf returned NaN");
+    coarse[p] = Math.max(left, mid, right);
+    if (coarse[p] > top) top = coarse[p];
+    left = right;
+  }
+  return { coarse, top };
+}
+
 /**
  * ln ∫_lo^hi e^{L(w)} dw for a log-integrand that is smooth between given break points (kinks
  * such as |y − λ| at real eigenvalues): composite Gauss–Legendre on pieces no longer than
@@ -59,18 +75,8 @@ export function logIntegrate(
   const rule = gaussLegendre(options.nodes ?? 10);
   if (hi === lo) return -Infinity;
   const ends = pieceEnds(lo, hi, breaks, h);
-  const pieces = ends.length - 1;
-  const coarse = new Float64Array(pieces);
-  let top = -Infinity;
-  let left = logf(ends[0]);
-  for (let p = 0; p < pieces; p++) {
-    const right = logf(ends[p + 1]);
-    const mid = logf(0.5 * (ends[p] + ends[p + 1]));
-    if (Number.isNaN(left) || Number.isNaN(mid) || Number.isNaN(right)) throw new RangeError("logf returned NaN");
-    coarse[p] = Math.max(left, mid, right);
-    if (coarse[p] > top) top = coarse[p];
-    left = right;
-  }
+  const { coarse, top } = coarseScan(logf, ends);
+  const pieces = coarse.length;
   if (top === -Infinity) return -Infinity;
   const acc = new LogSum();
   for (let p = 0; p < pieces; p++) {
