@@ -3,3 +3,4 @@ export * from "./sessions";
 export * from "./groups";
 export * from "./outbox";
 export * from "./rate-limits";
+export * from "./maps";
