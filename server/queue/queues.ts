@@ -4,11 +4,15 @@ import { z } from "zod";
  * pg-boss queue names beside their payload schemas. Payloads are validated when dequeued.
  * - fill-cell: compute (or take from the cache) one grid position of one map.
  * - theory-row: compute the theory columns of one τ row (Kac–Rice eigenvalues reused across μ).
+ * - fill-cell-exhausted: dead letter of fill-cell; receives the payload of a job whose retries
+ *   are used up, so the cell and its map are marked failed instead of waiting forever.
  * - map-finished: follow-up work when a map completes (e-mail to the owner).
  */
 export const FILL_CELL_QUEUE = "fill-cell";
+export const FILL_CELL_EXHAUSTED_QUEUE = "fill-cell-exhausted";
 export const THEORY_ROW_QUEUE = "theory-row";
 export const MAP_FINISHED_QUEUE = "map-finished";
+export type QueueName = typeof FILL_CELL_QUEUE | typeof FILL_CELL_EXHAUSTED_QUEUE | typeof THEORY_ROW_QUEUE | typeof MAP_FINISHED_QUEUE;
 
 export const fillCellPayloadSchema = z.object({
   mapId: z.uuid(),
@@ -30,3 +34,11 @@ export type TheoryRowPayload = z.infer<typeof theoryRowPayloadSchema>;
 
 export const mapFinishedPayloadSchema = z.object({ mapId: z.uuid() });
 export type MapFinishedPayload = z.infer<typeof mapFinishedPayloadSchema>;
+
+/** Payload type of each queue (fill-cell-exhausted carries the fill-cell payload). */
+export interface QueuePayloads {
+  [FILL_CELL_QUEUE]: FillCellPayload;
+  [FILL_CELL_EXHAUSTED_QUEUE]: FillCellPayload;
+  [THEORY_ROW_QUEUE]: TheoryRowPayload;
+  [MAP_FINISHED_QUEUE]: MapFinishedPayload;
+}

@@ -1,0 +1,93 @@
+import PgBoss from "pg-boss";
+import { logger as defaultLogger, type Logger } from "../lib/logger";
+import { FILL_CELL_EXHAUSTED_QUEUE, FILL_CELL_QUEUE, MAP_FINISHED_QUEUE, THEORY_ROW_QUEUE, type QueueName } from "./queues";
+
+/** Retry and expiry policy of one queue (pg-boss 10 queue options). */
+export interface QueuePolicy {
+  /** Retries after the first attempt (a job runs at most retryLimit + 1 times). */
+  retryLimit: number;
+  /** Seconds before the first retry; doubled (with jitter) per retry when retryBackoff. */
+  retryDelay: number;
+  retryBackoff: boolean;
+  /**
+   * Seconds a job may stay active. A worker that dies mid-job leaves it active; maintenance
+   * fails it after this long and pg-boss retries it on another worker. A handler still running
+   * past it is failed (and retried) by its own worker.
+   */
+  expireInSeconds: number;
+  /** Queue that receives a job's payload when its retries are used up. */
+  deadLetter?: QueueName;
+}
+
+/**
+ * Default policies. fill-cell: 3 retries (brief: retryable failures are retried, limit 3);
+ * 30 minutes active at most, which covers the largest admin budget measured by
+ * `npm run bench:maps` with margin; jobs that exhaust their retries go to fill-cell-exhausted,
+ * whose handler marks the cell and its map failed instead of leaving the map waiting forever.
+ */
+export const DEFAULT_QUEUE_POLICIES: Record<QueueName, QueuePolicy> = {
+  [FILL_CELL_QUEUE]: { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 30 * 60, deadLetter: FILL_CELL_EXHAUSTED_QUEUE },
+  [FILL_CELL_EXHAUSTED_QUEUE]: { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 5 * 60 },
+  [THEORY_ROW_QUEUE]: { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 15 * 60 },
+  [MAP_FINISHED_QUEUE]: { retryLimit: 3, retryDelay: 30, retryBackoff: true, expireInSeconds: 5 * 60 },
+};
+
+export interface BossOptions {
+  /** PostgreSQL schema of pg-boss's tables (default "pgboss"). */
+  schema?: string;
+  /** Connections pg-boss holds open (default 4). */
+  max?: number;
+  /** Seconds between maintenance runs: expiring stuck jobs, archiving, deleting (default 60). */
+  maintenanceIntervalSeconds?: number;
+  /** Seconds between queue-size "monitor-states" events (default: none). */
+  monitorStateIntervalSeconds?: number;
+  /** Per-queue policy overrides, merged over DEFAULT_QUEUE_POLICIES. */
+  queues?: Partial<Record<QueueName, Partial<QueuePolicy>>>;
+  /** Shown in pg_stat_activity (default "equilibrist-queue"). */
+  applicationName?: string;
+  logger?: Logger;
+}
+
+/** The queue policies after merging overrides (the ones createBoss writes). */
+export function queuePolicies(overrides: BossOptions["queues"] = {}): Record<QueueName, QueuePolicy> {
+  const out = {} as Record<QueueName, QueuePolicy>;
+  for (const [name, policy] of Object.entries(DEFAULT_QUEUE_POLICIES) as [QueueName, QueuePolicy][]) {
+    out[name] = { ...policy, ...overrides[name] };
+  }
+  return out;
+}
+
+/**
+ * Starts pg-boss 10 on `databaseUrl` (creating or migrating its schema) and makes sure every
+ * queue exists with its policy. Queues without a dead letter are created first, since a dead
+ * letter must exist before the queue pointing at it. The policy is written on every start
+ * (createQueue does nothing for an existing queue, so updateQueue follows): the process
+ * started last decides the policy of jobs sent from then on. Start one per process.
+ * @param databaseUrl postgres:// URL of the product's database
+ * @param options schema, pool size, maintenance interval, queue policies, logger
+ * @returns the started PgBoss; stop it with `boss.stop()`
+ * @throws when the database cannot be reached or the schema cannot be created
+ */
+export async function createBoss(databaseUrl: string, options: BossOptions = {}): Promise<PgBoss> {
+  const log = options.logger ?? defaultLogger;
+  const boss = new PgBoss({
+    connectionString: databaseUrl,
+    schema: options.schema ?? "pgboss",
+    max: options.max ?? 4,
+    application_name: options.applicationName ?? "equilibrist-queue",
+    maintenanceIntervalSeconds: options.maintenanceIntervalSeconds ?? 60,
+    ...(options.monitorStateIntervalSeconds ? { monitorStateIntervalSeconds: options.monitorStateIntervalSeconds } : {}),
+  });
+  boss.on("error", (err: Error) => log.warn("queue error", { message: err.message }));
+  await boss.start();
+  const policies = queuePolicies(options.queues);
+  const ordered = (Object.keys(policies) as QueueName[]).sort((a, b) => Number(!!policies[a].deadLetter) - Number(!!policies[b].deadLetter));
+  for (const name of ordered) {
+    const queue = { name, policy: "standard" as const, ...policies[name] };
+    await boss.createQueue(name, queue);
+    await boss.updateQueue(name, queue);
+  }
+  return boss;
+}
+
+export type { PgBoss };
