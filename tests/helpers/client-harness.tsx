@@ -1,10 +1,14 @@
-import { render } from "@testing-library/react";
+import { configure, render } from "@testing-library/react";
 import { createMemoryRouter, RouterProvider } from "react-router-dom";
 import { AppProvider, createAppQueryClient } from "../../src/app/provider";
 import { createRoutes } from "../../src/app/router";
 import { resetToasts } from "../../src/lib/toast-store";
 
 const nodeFetch = globalThis.fetch;
+
+// Every page here waits on the real server, and password hashing (argon2id) on a busy 2-core
+// machine can take more than the default 1 s of findBy*/waitFor.
+configure({ asyncUtilTimeout: 10_000 });
 
 /**
  * Points the client's relative `fetch("/api/…")` calls at a real test server, carrying a

@@ -7,8 +7,10 @@ type Explained = { status?: number; title: string; detail: string };
 
 function explain(error: unknown): Explained {
   const status = isApiError(error) ? error.status : isRouteErrorResponse(error) ? error.status : undefined;
-  if (status === 404) return { status, title: "Nothing here", detail: "This page does not exist, or it is not shared with you." };
-  if (status === 403) return { status, title: "Not for this account", detail: "Your role does not allow this page." };
+  // The server's own words name what is missing ("Invitation not found"); keep them.
+  const said = isApiError(error) ? `${error.message.replace(/\.$/, "")}. ` : "";
+  if (status === 404) return { status, title: "Nothing here", detail: `${said}The link may be wrong, or it is not shared with you.` };
+  if (status === 403) return { status, title: "Not for this account", detail: `${said}Your role does not allow this page.` };
   if (isApiError(error) && error.status === 0) return { title: "Offline", detail: error.message };
   if (isApiError(error)) return { status, title: "The server refused", detail: error.message };
   return { status, title: "Something broke", detail: "An unexpected error stopped this page. Reload to try again." };
