@@ -6,6 +6,7 @@ import { eq } from "drizzle-orm";
 import { createApp, type AppHandle } from "../../server/app";
 import { openDatabase } from "../../server/db/client";
 import { users } from "../../server/db/schema/index";
+import { seedDemoLab } from "../../server/db/seed/demo-lab";
 import { startFakeSmtp } from "../../server/mail/fake-smtp";
 import { createMailer } from "../../server/mail/mailer";
 import { insertOutboxMessage } from "../../server/mail/outbox.repo";
@@ -19,9 +20,10 @@ export const DIST_DIR = path.resolve(import.meta.dirname, "../../dist");
  * ephemeral loopback port, a fresh clone of the migrated test database, and the SMTP fake
  * (port 0) storing mail in the outbox, exactly as `npm start` wires them.
  */
-export async function startE2eApp() {
-  if (!existsSync(path.join(DIST_DIR, "index.html"))) {
-    throw new Error("dist/index.html is missing: build the client first (`npx vite build`; `npm test` does it)");
+export async function startE2eApp(options: { clientDir?: string } = {}) {
+  const clientDir = options.clientDir ?? DIST_DIR;
+  if (!existsSync(path.join(clientDir, "index.html"))) {
+    throw new Error(`${clientDir}/index.html is missing: build the client first (\`npx vite build\`; \`npm test\` does it)`);
   }
   const testDb = await createTestDatabase();
   const database = openDatabase(testDb.url, { max: 5 });
@@ -34,13 +36,17 @@ export async function startE2eApp() {
   const handle: AppHandle = createApp({
     database,
     mailer,
-    clientDir: DIST_DIR,
+    clientDir,
     config: { appUrl: baseUrl, sessionSecret: "e2e-session-secret-0123456789abcdef" },
   });
   server.on("request", handle.app);
 
   return {
     baseUrl,
+    /** Inserts the demo lab of `npm start` (its people share the demo password). */
+    async seedDemo(): Promise<void> {
+      await seedDemoLab(database.db);
+    },
     /** Gives an existing account the site role admin (the seed does this for the demo lab). */
     async makeAdmin(email: string): Promise<void> {
       await database.db.update(users).set({ siteRole: "admin" }).where(eq(users.email, email));
