@@ -76,8 +76,11 @@ export function summarizeTheory(t: TheoryColumns | null): CellTheorySummary | nu
   };
 }
 
-/** One cell's summary: the dynamics part from its result (null while pending), theory from its row. */
-export function summarizeCell(pos: CellPosition, result: CellResult | null, theory: TheoryColumns | null): CellSummary {
+/**
+ * One cell's summary: the dynamics part from its result (null while pending), theory from its
+ * row. Only the result's aggregate is read, so callers may pass just `{ aggregate }`.
+ */
+export function summarizeCell(pos: CellPosition, result: Pick<CellResult, "aggregate"> | null, theory: TheoryColumns | null): CellSummary {
   const a = result?.aggregate;
   return {
     ...pos,
