@@ -35,6 +35,18 @@ export const apiRoutes = {
     rate: "/api/theory/rate",
     boundary: "/api/theory/boundary",
   },
+  maps: {
+    list: "/api/maps",
+    detail: "/api/maps/:id",
+    cancel: "/api/maps/:id/cancel",
+    grid: "/api/maps/:id/grid",
+    cell: "/api/maps/:id/cells/:i/:j",
+    exportCsv: "/api/maps/:id/export.csv",
+    exportJson: "/api/maps/:id/export.json",
+    share: "/api/maps/:id/share",
+    events: "/api/maps/:id/events",
+    shared: "/api/shared/:token",
+  },
 } as const;
 
 const seg = encodeURIComponent;
@@ -62,10 +74,24 @@ export const apiPaths = {
     outbox: apiRoutes.admin.outbox,
   },
   theory: apiRoutes.theory,
+  maps: {
+    list: apiRoutes.maps.list,
+    detail: (id: string) => `/api/maps/${seg(id)}`,
+    cancel: (id: string) => `/api/maps/${seg(id)}/cancel`,
+    grid: (id: string) => `/api/maps/${seg(id)}/grid`,
+    cell: (id: string, i: number, j: number) => `/api/maps/${seg(id)}/cells/${i}/${j}`,
+    exportCsv: (id: string) => `/api/maps/${seg(id)}/export.csv`,
+    exportJson: (id: string) => `/api/maps/${seg(id)}/export.json`,
+    share: (id: string) => `/api/maps/${seg(id)}/share`,
+    events: (id: string) => `/api/maps/${seg(id)}/events`,
+    shared: (token: string) => `/api/shared/${seg(token)}`,
+  },
 } as const;
 
 /** Client pages that e-mails link to (the server builds `${APP_URL}${page}`). */
 export const pagePaths = {
   reset: (token: string) => `/reset?token=${seg(token)}`,
   invite: (token: string) => `/invites/${seg(token)}`,
+  /** Read-only view of a shared map for signed-out readers. */
+  sharedMap: (token: string) => `/s/${seg(token)}`,
 } as const;
