@@ -59,10 +59,11 @@ export function queuePolicies(overrides: BossOptions["queues"] = {}): Record<Que
 
 /**
  * Starts pg-boss 10 on `databaseUrl` (creating or migrating its schema) and makes sure every
- * queue exists with its policy. Queues without a dead letter are created first, since a dead
- * letter must exist before the queue pointing at it. The policy is written on every start
- * (createQueue does nothing for an existing queue, so updateQueue follows): the process
- * started last decides the policy of jobs sent from then on. Start one per process.
+ * queue exists. Queues without a dead letter are created first, since a dead letter must exist
+ * before the queue pointing at it. A new queue gets the merged policy; an existing queue keeps
+ * the policy it has, except for queues named in `options.queues`, whose policy is rewritten
+ * (so plain processes never undo an explicit override). Jobs copy the queue's policy when they
+ * are sent. Start one per process.
  * @param databaseUrl postgres:// URL of the product's database
  * @param options schema, pool size, maintenance interval, queue policies, logger
  * @returns the started PgBoss; stop it with `boss.stop()`
@@ -85,7 +86,7 @@ export async function createBoss(databaseUrl: string, options: BossOptions = {})
   for (const name of ordered) {
     const queue = { name, policy: "standard" as const, ...policies[name] };
     await boss.createQueue(name, queue);
-    await boss.updateQueue(name, queue);
+    if (options.queues?.[name]) await boss.updateQueue(name, queue);
   }
   return boss;
 }

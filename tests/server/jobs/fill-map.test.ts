@@ -1,0 +1,152 @@
+import { and, eq, sql } from "drizzle-orm";
+import type PgBoss from "pg-boss";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { openDatabase, type Database } from "../../../server/db/client";
+import { cells, mapCells, maps, theoryRows } from "../../../server/db/schema/index";
+import { runCell } from "../../../server/engine/cell/run-cell";
+import { createComputePool, type ComputePool } from "../../../server/jobs/compute-pool";
+import { startJobWorkers, type JobWorkers } from "../../../server/jobs/job-workers";
+import { logger } from "../../../server/lib/logger";
+import { cellInputFor, type MapSpec } from "../../../server/modules/maps/cell-key";
+import { readMapProgress } from "../../../server/modules/cells/map-progress.repo";
+import { createBoss } from "../../../server/queue/boss";
+import { MAP_FINISHED_QUEUE } from "../../../server/queue/queues";
+import { createTestDatabase, type TestDatabase } from "../../helpers/db-template";
+import { SMALL_RATE_MAP, insertMapWithJobs, insertUser, waitFor } from "./map-fixture";
+
+// A map fills through the real pg-boss queue and an in-process worker (thread pool of 2) against
+// a fresh PostgreSQL database; results are compared with the engine run directly.
+
+let testDb: TestDatabase;
+let database: Database;
+let boss: PgBoss;
+let compute: ComputePool;
+let workers: JobWorkers;
+const WORKER = "test-host:4242";
+
+beforeAll(async () => {
+  testDb = await createTestDatabase();
+  database = openDatabase(testDb.url, { max: 6 });
+  boss = await createBoss(testDb.url, { maintenanceIntervalSeconds: 1 });
+  compute = createComputePool({ threads: 2 });
+  workers = await startJobWorkers({ db: database.db, boss, compute, workerName: WORKER, logger, pollingIntervalSeconds: 0.5 });
+});
+
+afterAll(async () => {
+  await workers?.stop();
+  await boss?.stop({ graceful: false });
+  await compute?.close();
+  await database?.close();
+  await testDb?.drop();
+});
+
+/** A CellResult without its wall-clock part (the only part that is not deterministic). */
+function withoutTiming(result: unknown): unknown {
+  const { timing: _timing, ...rest } = result as { timing: unknown };
+  return rest;
+}
+
+async function waitDone(mapId: string) {
+  return waitFor(async () => {
+    const p = await readMapProgress(database.db, mapId);
+    if (p?.status === "failed") throw new Error(`map failed: ${p.failure}`);
+    return p?.status === "done" ? p : undefined;
+  }, 60_000, `map ${mapId} done`);
+}
+
+describe("fill-cell through the queue", () => {
+  it("fills a 3 × 3 rate map at N = 6 with cells equal to runCell's output", async () => {
+    const owner = await insertUser(database.db);
+    const map = await insertMapWithJobs(database.db, boss, owner, SMALL_RATE_MAP);
+    const progress = await waitDone(map.id);
+    expect(progress).toMatchObject({ cellsTotal: 9, cellsDone: 9, cellsComputed: 9, cellsFromCache: 0 });
+    expect(progress.throughput).toBeGreaterThan(0);
+    expect(progress.etaSeconds).toBeNull();
+    expect(progress.startedAt).not.toBeNull();
+    expect(progress.finishedAt).not.toBeNull();
+
+    for (let i = 0; i < 3; i++) {
+      for (let j = 0; j < 3; j++) {
+        const [row] = await database.db.select().from(cells).where(eq(cells.key, map.cellKeys[i][j]));
+        const direct = runCell(cellInputFor(SMALL_RATE_MAP, i, j));
+        expect(withoutTiming(row.result)).toEqual(withoutTiming(direct));
+        expect(row.input).toEqual(cellInputFor(SMALL_RATE_MAP, i, j));
+        expect(row.worker).toBe(WORKER);
+        expect(row.computeSeconds).toBeGreaterThan(0);
+        expect((row.result as { counters: { steps: number } }).counters.steps).toBeGreaterThan(0);
+      }
+    }
+    const positions = await database.db.select().from(mapCells).where(eq(mapCells.mapId, map.id));
+    expect(positions.every((p) => p.state === "done" && !p.fromCache && p.doneAt !== null)).toBe(true);
+  });
+
+  it("stores the τ rows' theory columns and runs map-finished once", async () => {
+    const owner = await insertUser(database.db);
+    const spec: MapSpec = { ...SMALL_RATE_MAP, seed: 8 };
+    const map = await insertMapWithJobs(database.db, boss, owner, spec);
+    await waitDone(map.id);
+    const keys = (await database.db.selectDistinct({ k: mapCells.theoryKey }).from(mapCells).where(eq(mapCells.mapId, map.id))).map((r) => r.k);
+    expect(keys).toHaveLength(3);
+    const rows = await waitFor(async () => {
+      const found = await database.db.select().from(theoryRows).where(sql`${theoryRows.key} in ${keys}`);
+      return found.length === 3 ? found : undefined;
+    }, 20_000, "theory rows");
+    for (const row of rows) {
+      const columns = row.columns as { m: number; rateLines: { originStabilityMu: number } }[];
+      expect(columns).toHaveLength(3);
+      // Rate network: μ_c = g, so m = μ/g (shared/theory; the map's μ values are 0.5, 1.25, 2 with g = 1.5).
+      expect(columns.map((c) => c.m)).toEqual([0.5 / 1.5, 1.25 / 1.5, 2 / 1.5]);
+      // Origin stable iff μ > g(1 + τ) (Sommers et al., PRL 60 (1988) 1895).
+      expect(columns[0].rateLines.originStabilityMu).toBeCloseTo(1.5 * (1 + row.tau), 12);
+    }
+    const finished = await waitFor(async () => {
+      const [r] = await database.db.execute<{ n: number }>(
+        sql`select count(*)::int as n from pgboss.job where name = ${MAP_FINISHED_QUEUE} and data->>'mapId' = ${map.id} and state = 'completed'`,
+      ).then((x) => x.rows);
+      return r.n === 1 ? r.n : undefined;
+    }, 20_000, "map-finished job");
+    expect(finished).toBe(1);
+  });
+
+  it("serves cells another map stored meanwhile from the cache without computing them", async () => {
+    const [a, b] = [await insertUser(database.db, "a"), await insertUser(database.db, "b")];
+    const spec: MapSpec = { ...SMALL_RATE_MAP, seed: 9 };
+    // Both maps are created before any cell exists, so both get nine jobs; whichever job comes
+    // second for a key finds it stored (or loses the insert race) and stores nothing.
+    const first = await insertMapWithJobs(database.db, boss, a, spec);
+    const second = await insertMapWithJobs(database.db, boss, b, spec);
+    const [pa, pb] = [await waitDone(first.id), await waitDone(second.id)];
+    const keys = first.cellKeys.flat();
+    expect(second.cellKeys.flat()).toEqual(keys);
+    const stored = await database.db.select({ n: sql<number>`count(*)::int` }).from(cells).where(sql`${cells.key} in ${keys}`);
+    expect(stored[0].n).toBe(9);
+    expect(pa.cellsComputed + pb.cellsComputed).toBe(9);
+    expect(pa.cellsFromCache + pb.cellsFromCache).toBe(9);
+
+    // A third map created after the cells exist is done at creation: no job, nothing computed.
+    const third = await insertMapWithJobs(database.db, boss, b, spec);
+    expect(third.fillJobs).toHaveLength(0);
+    const [row] = await database.db.select().from(maps).where(eq(maps.id, third.id));
+    expect(row).toMatchObject({ status: "done", cellsComputed: 0, cellsFromCache: 9, cellsDone: 9 });
+  });
+
+  it("skips the queued cells of a cancelled map and keeps its finished ones", async () => {
+    const owner = await insertUser(database.db);
+    await workers.stop();
+    const spec: MapSpec = { ...SMALL_RATE_MAP, seed: 10 };
+    const map = await insertMapWithJobs(database.db, boss, owner, spec);
+    // One cell finished before the cancel (as if a worker had stored it), then the map is cancelled.
+    await database.db.update(mapCells).set({ state: "done", doneAt: new Date() }).where(and(eq(mapCells.mapId, map.id), eq(mapCells.i, 0), eq(mapCells.j, 0)));
+    await database.db.update(maps).set({ status: "cancelled", cellsDone: 1, cellsComputed: 1 }).where(eq(maps.id, map.id));
+    await database.db.update(mapCells).set({ state: "cancelled" }).where(and(eq(mapCells.mapId, map.id), eq(mapCells.state, "pending")));
+    workers = await startJobWorkers({ db: database.db, boss, compute, workerName: WORKER, logger, pollingIntervalSeconds: 0.5 });
+    await waitFor(async () => ((await boss.getQueueSize("fill-cell")) === 0 ? true : undefined), 30_000, "fill-cell queue drained");
+    const positions = await database.db.select().from(mapCells).where(eq(mapCells.mapId, map.id));
+    expect(positions.filter((p) => p.state === "done")).toHaveLength(1);
+    expect(positions.filter((p) => p.state === "cancelled")).toHaveLength(8);
+    const stored = await database.db.select({ n: sql<number>`count(*)::int` }).from(cells).where(sql`${cells.key} in ${map.cellKeys.flat()}`);
+    expect(stored[0].n).toBe(0);
+    const [row] = await database.db.select().from(maps).where(eq(maps.id, map.id));
+    expect(row).toMatchObject({ status: "cancelled", cellsDone: 1 });
+  });
+});
