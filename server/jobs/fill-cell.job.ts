@@ -88,7 +88,8 @@ export async function giveUpCell(deps: Pick<FillCellDeps, "cells" | "logger">, j
   if (!parsed.success) return;
   const output = job.output as { message?: unknown; value?: { message?: unknown } } | null;
   const last = output?.message ?? output?.value?.message ?? "unknown error";
-  const message = `gave up after ${job.retryLimit + 1} attempts; last error: ${String(last)}`;
+  const attempts = job.retryLimit + 1;
+  const message = `gave up after ${attempts} attempt${attempts === 1 ? "" : "s"}; last error: ${String(last)}`;
   deps.logger.warn("fill-cell exhausted its retries", { ...parsed.data, message });
   await deps.cells.recordFailed({ ...parsed.data, message });
 }

@@ -10,7 +10,7 @@ import { logger } from "../../../server/lib/logger";
 import { cellInputFor, type MapSpec } from "../../../server/modules/maps/cell-key";
 import { readMapProgress } from "../../../server/modules/cells/map-progress.repo";
 import { createBoss } from "../../../server/queue/boss";
-import { MAP_FINISHED_QUEUE } from "../../../server/queue/queues";
+import { FILL_CELL_QUEUE, MAP_FINISHED_QUEUE } from "../../../server/queue/queues";
 import { createTestDatabase, type TestDatabase } from "../../helpers/db-template";
 import { SMALL_RATE_MAP, insertMapWithJobs, insertUser, waitFor } from "./map-fixture";
 
@@ -34,7 +34,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await workers?.stop();
-  await boss?.stop({ graceful: false });
+  await boss?.stop({ graceful: true, timeout: 5000 });
   await compute?.close();
   await database?.close();
   await testDb?.drop();
@@ -148,5 +148,46 @@ describe("fill-cell through the queue", () => {
     expect(stored[0].n).toBe(0);
     const [row] = await database.db.select().from(maps).where(eq(maps.id, map.id));
     expect(row).toMatchObject({ status: "cancelled", cellsDone: 1 });
+  });
+
+  it("fails the map with the engine's message when the engine refuses a cell, and cancels the rest", async () => {
+    const owner = await insertUser(database.db);
+    // The engine's exhaustive search is limited to N ≤ 10 (validateCellInput throws a RangeError
+    // inside the worker thread); the manifest check that normally stops this is bypassed here.
+    const spec: MapSpec = { ...SMALL_RATE_MAP, settings: { ...SMALL_RATE_MAP.settings, N: 12 }, budget: { ...SMALL_RATE_MAP.budget, exhaustive: true } };
+    const map = await insertMapWithJobs(database.db, boss, owner, spec);
+    const failed = await waitFor(async () => {
+      const p = await readMapProgress(database.db, map.id);
+      return p?.status === "failed" ? p : undefined;
+    }, 30_000, "map failed");
+    expect(failed.failure).toMatch(/^Cell \(\d, \d\) failed: RangeError: budget\.exhaustive needs N ≤ 10, got N = 12$/);
+    expect(failed.finishedAt).not.toBeNull();
+    await waitFor(async () => ((await boss.getQueueSize("fill-cell")) === 0 ? true : undefined), 30_000, "fill-cell queue drained");
+    const positions = await database.db.select().from(mapCells).where(eq(mapCells.mapId, map.id));
+    expect(positions.filter((p) => p.state === "failed")).toHaveLength(1);
+    expect(positions.filter((p) => p.state === "cancelled")).toHaveLength(8);
+    expect(positions.find((p) => p.state === "failed")?.failure).toMatch(/budget\.exhaustive needs N ≤ 10/);
+  });
+
+  it("marks the cell and the map failed when a job used up its retries (dead letter)", async () => {
+    const owner = await insertUser(database.db);
+    await workers.stop();
+    const map = await insertMapWithJobs(database.db, boss, owner, { ...SMALL_RATE_MAP, seed: 11 });
+    // A job of that map with no retries fails once (as a lost database connection would make
+    // it): pg-boss moves its payload and last error to fill-cell-exhausted.
+    const payload = { mapId: map.id, i: 1, j: 2, cellKey: map.cellKeys[1][2] };
+    await boss.deleteJob(FILL_CELL_QUEUE, map.fillJobs);
+    const id = await boss.send(FILL_CELL_QUEUE, payload, { retryLimit: 0 });
+    const [taken] = await boss.fetch(FILL_CELL_QUEUE);
+    expect(taken.id).toBe(id);
+    await boss.fail(FILL_CELL_QUEUE, taken.id, { message: "connection terminated" });
+    workers = await startJobWorkers({ db: database.db, boss, compute, workerName: WORKER, logger, pollingIntervalSeconds: 0.5 });
+    const failed = await waitFor(async () => {
+      const p = await readMapProgress(database.db, map.id);
+      return p?.status === "failed" ? p : undefined;
+    }, 30_000, "map failed");
+    expect(failed.failure).toBe("Cell (1, 2) failed: gave up after 1 attempt; last error: connection terminated");
+    const [position] = await database.db.select().from(mapCells).where(and(eq(mapCells.mapId, map.id), eq(mapCells.i, 1), eq(mapCells.j, 2)));
+    expect(position.state).toBe("failed");
   });
 });
