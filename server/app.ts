@@ -18,6 +18,11 @@ import { createGroupsService } from "./modules/groups/groups.service";
 import { createInvitesService } from "./modules/groups/invites.service";
 import { createHealthRouter } from "./modules/health/health.router";
 import { createHealthService } from "./modules/health/health.service";
+import { createMapReadsService } from "./modules/maps/map-reads.service";
+import { bossMapJobs, noMapJobs } from "./modules/maps/maps.jobs";
+import { createMapsRouter } from "./modules/maps/maps.router";
+import { createMapsService } from "./modules/maps/maps.service";
+import type { PgBoss } from "./queue/boss";
 import { createTheoryRouter } from "./modules/theory/theory.router";
 
 export interface AppConfig {
@@ -39,6 +44,8 @@ export interface AppDeps {
   logger?: Logger;
   /** Built client (dist/): served with an SPA fallback for every non-/api path. */
   clientDir?: string;
+  /** Started pg-boss (server/queue/boss.ts) for map jobs; without it creating a map answers 503. */
+  boss?: PgBoss;
 }
 
 export interface AppHandle {
@@ -62,6 +69,8 @@ export function createApp(deps: AppDeps): AppHandle {
   const invites = createInvitesService({ db, mailer: deps.mailer, appUrl: config.appUrl, groups });
   const admin = createAdminService({ db });
   const health = createHealthService({ db, logger });
+  const maps = createMapsService({ db, groups, appUrl: config.appUrl, jobs: deps.boss ? bossMapJobs(deps.boss) : noMapJobs });
+  const mapReads = createMapReadsService({ db, maps });
 
   const PgStore = connectPgSimple(session);
   const store = new PgStore({
@@ -105,6 +114,7 @@ export function createApp(deps: AppDeps): AppHandle {
   app.use(createGroupsRouter(groups, invites));
   app.use(createAdminRouter(admin));
   app.use(createTheoryRouter());
+  app.use(createMapsRouter(maps, mapReads));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir) {

@@ -1,5 +1,9 @@
 import { z } from "zod";
+import { cellSummarySchema } from "../maps/cell-summary";
+import { layerIds } from "../maps/layers";
+import { cellResultSchema } from "./cell-result";
 import { idSchema, timestampSchema } from "./common";
+import { theoryColumnsSchema } from "./theory";
 
 /**
  * Maps: sweeps over (μ, τ). The create body is the map's manifest; everything that determines a
@@ -176,3 +180,55 @@ export const cellParamsSchema = z.object({
   i: z.coerce.number().int().min(0).max(63),
   j: z.coerce.number().int().min(0).max(63),
 });
+
+// ——— Read routes: queries and answers ———
+
+/** `?share=TOKEN`: every read route accepts a share link's token (read-only access). */
+export const shareQuerySchema = z.object({ share: z.string().trim().min(1).max(100).optional() });
+export type ShareQuery = z.infer<typeof shareQuerySchema>;
+
+export const mapIdParamsSchema = z.object({ id: idSchema });
+export const shareTokenParamsSchema = z.object({ token: z.string().trim().min(1).max(100) });
+
+/** GET /api/maps/:id/grid?layer= */
+export const gridQuerySchema = shareQuerySchema.extend({ layer: z.enum(layerIds).default("stable-found") });
+export type GridQuery = z.infer<typeof gridQuerySchema>;
+
+/** One layer of a map: values[j][i] (j along τ, i along μ), null where the cell has none. */
+export const mapGridSchema = z.object({
+  layer: z.enum(layerIds),
+  mu: z.array(z.number()),
+  tau: z.array(z.number()),
+  values: z.array(z.array(z.number().nullable())),
+  cells: z.array(cellSummarySchema),
+});
+export type MapGrid = z.infer<typeof mapGridSchema>;
+
+/** GET /api/maps/:id/cells/:i/:j */
+export const mapCellDetailSchema = z.object({
+  summary: cellSummarySchema,
+  /** The full engine result (null while the cell is not done). */
+  result: cellResultSchema.nullable(),
+  /** The τ row's theory columns at this μ (null until the row is computed). */
+  theory: theoryColumnsSchema.nullable(),
+  cellKey: z.string(),
+  fromCache: z.boolean(),
+});
+export type MapCellDetail = z.infer<typeof mapCellDetailSchema>;
+
+/** POST /api/maps answer: the estimate alone (estimateOnly) or the new map with it. */
+export const createMapAnswerSchema = z.union([mapSchema.extend(mapEstimateSchema.shape), mapEstimateSchema]);
+
+/** POST /api/maps/:id/share */
+export const mapShareSchema = z.object({ token: z.string(), url: z.string() });
+export type MapShare = z.infer<typeof mapShareSchema>;
+
+/** GET /api/maps/:id/export.json */
+export const mapExportSchema = z.object({
+  manifest: z.record(z.string(), z.unknown()),
+  engineVersion: z.string(),
+  ensembleVersion: z.string(),
+  exportedAt: timestampSchema,
+  cells: z.array(cellSummarySchema.extend({ cellKey: z.string() })),
+});
+export type MapExport = z.infer<typeof mapExportSchema>;
