@@ -7,11 +7,14 @@ import { outbox, users } from "../../server/db/schema/index";
 import { startFakeSmtp, type FakeSmtp } from "../../server/mail/fake-smtp";
 import { createMailer, type Mailer } from "../../server/mail/mailer";
 import { insertOutboxMessage } from "../../server/mail/outbox.repo";
+import { createBoss, type PgBoss } from "../../server/queue/boss";
 import { createTestDatabase, type TestDatabase } from "./db-template";
 import { createClient, type TestClient } from "./http-client";
 
 export interface TestAppOptions {
   config?: Partial<Omit<AppConfig, "appUrl">>;
+  /** Start pg-boss on the test database and give it to the app (map jobs are enqueued; no worker runs them). */
+  queue?: boolean;
 }
 
 /**
@@ -23,6 +26,7 @@ export async function startTestApp(options: TestAppOptions = {}) {
   const database: Database = openDatabase(testDb.url, { max: 5 });
   const smtp: FakeSmtp = await startFakeSmtp({ port: 0, onMessage: (m) => insertOutboxMessage(database.db, m) });
   const mailer: Mailer = createMailer({ host: "127.0.0.1", port: smtp.port, from: "Equilibrist <no-reply@equilibrist.test>" });
+  const boss: PgBoss | undefined = options.queue ? await createBoss(testDb.url, { max: 2 }) : undefined;
 
   let server: http.Server;
   let handle: AppHandle;
@@ -36,6 +40,7 @@ export async function startTestApp(options: TestAppOptions = {}) {
     handle = createApp({
       database: appDatabase,
       mailer,
+      boss,
       config: { appUrl: baseUrl, sessionSecret: "test-session-secret-0123456789", ...options.config },
     });
     server.on("request", handle.app);
@@ -53,6 +58,8 @@ export async function startTestApp(options: TestAppOptions = {}) {
 
   return {
     database,
+    /** The app's pg-boss when started with `queue: true`. */
+    boss,
     get baseUrl() {
       return baseUrl;
     },
@@ -77,6 +84,7 @@ export async function startTestApp(options: TestAppOptions = {}) {
     },
     async stop(): Promise<void> {
       await shutdownHttp();
+      await boss?.stop({ graceful: false, close: true, wait: true });
       mailer.close();
       await smtp.close();
       await database.close();
