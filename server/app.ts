@@ -18,6 +18,8 @@ import { createGroupsService } from "./modules/groups/groups.service";
 import { createInvitesService } from "./modules/groups/invites.service";
 import { createHealthRouter } from "./modules/health/health.router";
 import { createHealthService } from "./modules/health/health.service";
+import { createMapEventsHub } from "./modules/maps/map-events.hub";
+import { createMapEventsRouter } from "./modules/maps/map-events.router";
 import { createMapReadsService } from "./modules/maps/map-reads.service";
 import { bossMapJobs, noMapJobs } from "./modules/maps/maps.jobs";
 import { createMapsRouter } from "./modules/maps/maps.router";
@@ -71,6 +73,7 @@ export function createApp(deps: AppDeps): AppHandle {
   const health = createHealthService({ db, logger });
   const maps = createMapsService({ db, groups, appUrl: config.appUrl, jobs: deps.boss ? bossMapJobs(deps.boss) : noMapJobs });
   const mapReads = createMapReadsService({ db, maps });
+  const mapEvents = createMapEventsHub({ db, pool, logger });
 
   const PgStore = connectPgSimple(session);
   const store = new PgStore({
@@ -115,6 +118,7 @@ export function createApp(deps: AppDeps): AppHandle {
   app.use(createAdminRouter(admin));
   app.use(createTheoryRouter());
   app.use(createMapsRouter(maps, mapReads));
+  app.use(createMapEventsRouter({ hub: mapEvents, canRead: (actor, id, token) => maps.getReadable(actor, id, token) }));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir) {
@@ -128,6 +132,7 @@ export function createApp(deps: AppDeps): AppHandle {
     app,
     close: async () => {
       clearInterval(prune);
+      await mapEvents.close();
       await store.close();
     },
   };

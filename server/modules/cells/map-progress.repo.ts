@@ -1,26 +1,12 @@
 import { sql } from "drizzle-orm";
+import type { MapProgress } from "../../../shared/maps/map-events";
 import type { Executor } from "../../db/client";
 import type { MapStatus } from "./map-fill.repo";
 
 /** Seconds of recent computing over which throughput is measured. */
 export const THROUGHPUT_WINDOW_SECONDS = 300;
 
-/** A map's fill counters with throughput and ETA (the `progress` event and the map view). */
-export interface MapProgress {
-  mapId: string;
-  status: MapStatus;
-  failure: string | null;
-  cellsTotal: number;
-  cellsDone: number;
-  cellsComputed: number;
-  cellsFromCache: number;
-  /** Cells computed per minute over the window, null before any was computed in it. */
-  throughput: number | null;
-  /** Seconds left at that throughput, null unless the map is queued or running. */
-  etaSeconds: number | null;
-  startedAt: string | null;
-  finishedAt: string | null;
-}
+export type { MapProgress } from "../../../shared/maps/map-events";
 
 interface ProgressRow extends Record<string, unknown> {
   id: string;
