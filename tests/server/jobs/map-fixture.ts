@@ -1,16 +1,20 @@
 import { randomBytes } from "node:crypto";
+import { asc, eq } from "drizzle-orm";
 import type PgBoss from "pg-boss";
+import { createMapSchema } from "../../../shared/schemas/maps";
 import type { Db } from "../../../server/db/client";
 import { mapCells, maps, users } from "../../../server/db/schema/index";
 import { getEnsemble } from "../../../server/engine/ensembles/registry";
-import { storedCellKeys } from "../../../server/modules/cells/cells.repo";
+import type { Actor } from "../../../server/lib/actor";
+import { createGroupsService } from "../../../server/modules/groups/groups.service";
 import { cellInputFor, cellKey, theoryPayloadFor, type MapSpec } from "../../../server/modules/maps/cell-key";
-import { FILL_CELL_QUEUE, THEORY_ROW_QUEUE } from "../../../server/queue/queues";
+import { bossMapJobs } from "../../../server/modules/maps/maps.jobs";
+import { createMapsService, type MapsService } from "../../../server/modules/maps/maps.service";
+import { FILL_CELL_QUEUE } from "../../../server/queue/queues";
 import { sendMany } from "../../../server/queue/send";
 
-// Job tests need maps with their grid and jobs without going through HTTP. This inserts them
-// the way a map is created (one transaction: map row, grid positions — cached ones done at
-// once — and one fill-cell job per missing cell plus one theory-row job per τ row).
+// Maps for the job tests: created through the maps service (the path of POST /api/maps), or —
+// for the one test that needs a map today's rules refuse — inserted directly.
 
 /** The 3 × 3 rate-network map at N = 6 of the job tests (issue 5). */
 export const SMALL_RATE_MAP: MapSpec = {
@@ -22,54 +26,73 @@ export const SMALL_RATE_MAP: MapSpec = {
   seed: 7,
 };
 
-export async function insertUser(db: Db, label = "owner"): Promise<string> {
+export async function insertUser(db: Db, label = "owner"): Promise<Actor> {
   const tag = `${label}-${randomBytes(4).toString("hex")}`;
-  const [row] = await db.insert(users).values({ email: `${tag}@lab.example`, name: tag, passwordHash: "not-a-real-hash" }).returning({ id: users.id });
-  return row.id;
+  const [row] = await db
+    .insert(users)
+    .values({ email: `${tag}@lab.example`, name: tag, passwordHash: "not-a-real-hash" })
+    .returning({ id: users.id, email: users.email, name: users.name, siteRole: users.siteRole });
+  return row;
 }
 
-export interface InsertedMap {
+export interface CreatedMap {
   id: string;
+  /** cellKeys[i][j] of every position. */
   cellKeys: string[][];
+  /** Fill-cell job ids of the positions that were not cached at creation. */
   fillJobs: string[];
+  answer: Awaited<ReturnType<MapsService["create"]>>;
 }
 
-/** Inserts a map with its grid and enqueues its jobs in one transaction. */
-export async function insertMapWithJobs(db: Db, boss: PgBoss, ownerId: string, spec: MapSpec): Promise<InsertedMap> {
-  const settings = getEnsemble(spec.ensemble).validate(spec.settings) as Record<string, unknown>;
+async function describeMap(db: Db, spec: MapSpec, id: string): Promise<Omit<CreatedMap, "answer">> {
+  const rows = await db.select().from(mapCells).where(eq(mapCells.mapId, id)).orderBy(asc(mapCells.j), asc(mapCells.i));
+  const cellKeys = Array.from({ length: spec.mu.steps }, (_, i) => Array.from({ length: spec.tau.steps }, (_, j) => rows[j * spec.mu.steps + i].cellKey));
+  return { id, cellKeys, fillJobs: rows.flatMap((r) => (r.jobId ? [r.jobId] : [])) };
+}
+
+/** The real maps service on this database and queue. */
+export function mapsServiceOn(db: Db, boss: PgBoss): MapsService {
+  return createMapsService({ db, groups: createGroupsService({ db }), appUrl: "http://127.0.0.1:1", jobs: bossMapJobs(boss) });
+}
+
+/**
+ * Creates a map through the maps service, as POST /api/maps does: positions, cached cells and
+ * the fill-cell and theory-row jobs in one transaction.
+ */
+export async function createMap(db: Db, boss: PgBoss, owner: Actor, spec: MapSpec): Promise<CreatedMap> {
+  const maps = mapsServiceOn(db, boss);
+  const body = createMapSchema.parse({ title: "job test map", ...spec, visibility: "private" });
+  const answer = await maps.create(owner, body);
+  if (!("id" in answer)) throw new Error("expected a created map");
+  return { ...(await describeMap(db, spec, answer.id)), answer };
+}
+
+/**
+ * Inserts a map row, its grid and its jobs directly, bypassing the manifest rules — a map stored
+ * under earlier rules that the engine now refuses (the service would reject it at creation).
+ */
+export async function insertLegacyMap(db: Db, boss: PgBoss, owner: Actor, spec: MapSpec): Promise<Omit<CreatedMap, "answer">> {
   const positions: { i: number; j: number; mu: number; tau: number; cellKey: string; theoryKey: string }[] = [];
   for (let j = 0; j < spec.tau.steps; j++) {
-    const theoryKey = theoryPayloadFor(spec, j).theoryKey;
     for (let i = 0; i < spec.mu.steps; i++) {
       const input = cellInputFor(spec, i, j);
-      positions.push({ i, j, mu: input.mu, tau: input.tau, cellKey: cellKey(input), theoryKey });
+      positions.push({ i, j, mu: input.mu, tau: input.tau, cellKey: cellKey(input), theoryKey: theoryPayloadFor(spec, j).theoryKey });
     }
   }
-  return db.transaction(async (tx) => {
-    const cached = await storedCellKeys(tx, positions.map((p) => p.cellKey));
+  const id = await db.transaction(async (tx) => {
     const [map] = await tx
       .insert(maps)
       .values({
-        ownerId, title: "fixture map", ensemble: spec.ensemble, ensembleVersion: getEnsemble(spec.ensemble).version,
-        settings, muAxis: spec.mu, tauAxis: spec.tau, budget: cellInputFor(spec, 0, 0).budget, seed: spec.seed,
-        cellsTotal: positions.length, cellsDone: cached.size, cellsFromCache: cached.size,
-        status: cached.size === positions.length ? "done" : "queued",
+        ownerId: owner.id, title: "legacy map", ensemble: spec.ensemble, ensembleVersion: getEnsemble(spec.ensemble).version,
+        settings: getEnsemble(spec.ensemble).validate(spec.settings), muAxis: spec.mu, tauAxis: spec.tau,
+        budget: cellInputFor(spec, 0, 0).budget, seed: spec.seed, cellsTotal: positions.length,
       })
       .returning({ id: maps.id });
-    const missing = positions.filter((p) => !cached.has(p.cellKey));
-    const fillJobs = await sendMany(boss, tx, FILL_CELL_QUEUE, missing.map((p) => ({ mapId: map.id, i: p.i, j: p.j, cellKey: p.cellKey })));
-    const jobOf = new Map(missing.map((p, k) => [`${p.i},${p.j}`, fillJobs[k]]));
-    await tx.insert(mapCells).values(
-      positions.map((p) => {
-        const hit = cached.has(p.cellKey);
-        return { ...p, mapId: map.id, state: hit ? ("done" as const) : ("pending" as const), fromCache: hit, jobId: jobOf.get(`${p.i},${p.j}`) ?? null };
-      }),
-    );
-    const rows = Array.from({ length: spec.tau.steps }, (_, j) => theoryPayloadFor(spec, j));
-    await sendMany(boss, tx, THEORY_ROW_QUEUE, rows, { priority: 1 });
-    const cellKeys = Array.from({ length: spec.mu.steps }, (_, i) => Array.from({ length: spec.tau.steps }, (_, j) => positions[j * spec.mu.steps + i].cellKey));
-    return { id: map.id, cellKeys, fillJobs };
+    const jobs = await sendMany(boss, tx, FILL_CELL_QUEUE, positions.map((p) => ({ mapId: map.id, i: p.i, j: p.j, cellKey: p.cellKey })));
+    await tx.insert(mapCells).values(positions.map((p, k) => ({ ...p, mapId: map.id, jobId: jobs[k] })));
+    return map.id;
   });
+  return describeMap(db, spec, id);
 }
 
 /** Polls until `check` returns a value (not undefined), or fails after `timeoutMs`. */

@@ -8,7 +8,7 @@ import type { MapSpec } from "../../../server/modules/maps/cell-key";
 import { createBoss } from "../../../server/queue/boss";
 import { FILL_CELL_QUEUE } from "../../../server/queue/queues";
 import { createTestDatabase, type TestDatabase } from "../../helpers/db-template";
-import { SMALL_RATE_MAP, insertMapWithJobs, insertUser, waitFor } from "../jobs/map-fixture";
+import { SMALL_RATE_MAP, createMap, insertUser, waitFor } from "../jobs/map-fixture";
 import { spawnWorker, type WorkerProcess } from "./worker-process";
 
 // Worker processes (`node --import tsx server/worker.ts`, one thread each) are killed in the
@@ -77,7 +77,7 @@ async function expectCompleteOnce(mapId: string, keys: string[]): Promise<void> 
 describe("worker process faults", () => {
   it("a worker killed with SIGKILL mid-cell loses nothing: the job expires, is retried, each cell is stored once", async () => {
     const owner = await insertUser(database.db);
-    const map = await insertMapWithJobs(database.db, boss, owner, { ...SLOW_MAP, seed: 21 });
+    const map = await createMap(database.db, boss, owner, { ...SLOW_MAP, seed: 21 });
     const first = await start();
     await midMap(map.id);
     first.child.kill("SIGKILL");
@@ -92,7 +92,7 @@ describe("worker process faults", () => {
 
   it("SIGTERM hands the running job back and exits cleanly; the next worker finishes the map", async () => {
     const owner = await insertUser(database.db);
-    const map = await insertMapWithJobs(database.db, boss, owner, { ...SLOW_MAP, seed: 22 });
+    const map = await createMap(database.db, boss, owner, { ...SLOW_MAP, seed: 22 });
     const first = await start();
     await midMap(map.id);
     first.child.kill("SIGTERM");
