@@ -4,3 +4,4 @@ export * from "./groups";
 export * from "./outbox";
 export * from "./rate-limits";
 export * from "./maps";
+export * from "./probes";

@@ -1,4 +1,4 @@
-import { index, pgEnum, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { boolean, index, pgEnum, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 
 export const siteRole = pgEnum("site_role", ["admin", "member"]);
 
@@ -9,6 +9,8 @@ export const users = pgTable("users", {
   name: text("name").notNull(),
   passwordHash: text("password_hash").notNull(),
   siteRole: siteRole("site_role").notNull().default("member"),
+  /** Opt-in: e-mail the owner when one of their maps finishes. */
+  notifyMapFinished: boolean("notify_map_finished").notNull().default(false),
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });
