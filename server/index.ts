@@ -7,6 +7,7 @@ import { openDatabase } from "./db/client";
 import { loadEnv } from "./env";
 import { logger } from "./lib/logger";
 import { createMailer } from "./mail/mailer";
+import { createBoss } from "./queue/boss";
 
 // Process entry: connect, listen on loopback, serve the built client, stop cleanly on signals.
 const env = loadEnv();
@@ -16,8 +17,13 @@ const dist = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../dist
 const clientDir = existsSync(path.join(dist, "index.html")) ? dist : undefined;
 if (!clientDir) logger.warn("no built client in dist/ (run `npx vite build`); serving the API only");
 
+// The web process only enqueues (maps are created with their jobs in one transaction);
+// worker processes (`npm run worker`) take the jobs.
+const boss = await createBoss(env.DATABASE_URL, { applicationName: "equilibrist-web" });
+
 const handle = createApp({
   database,
+  boss,
   mailer,
   clientDir,
   config: { appUrl: env.APP_URL, sessionSecret: env.SESSION_SECRET },
@@ -44,6 +50,7 @@ async function shutdown(signal: string): Promise<void> {
     server.closeIdleConnections();
   });
   await handle.close();
+  await boss.stop({ graceful: false, wait: true });
   mailer.close();
   await database.close();
   process.exit(0);
