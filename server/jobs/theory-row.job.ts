@@ -1,6 +1,6 @@
 import type { Db } from "../db/client";
 import type { Logger } from "../lib/logger";
-import { findTheoryRow } from "../modules/cells/cells.repo";
+import { hasTheoryRow } from "../modules/cells/cells.repo";
 import type { CellsService } from "../modules/cells/cells.service";
 import { theoryKey } from "../modules/maps/cell-key";
 import { theoryRowPayloadSchema } from "../queue/queues";
@@ -34,7 +34,7 @@ export async function computeTheoryRow(deps: TheoryRowDeps, data: unknown): Prom
     deps.logger.error("theory-row: key does not match the payload (another theory version?)", { theoryKey: key });
     return "skipped";
   }
-  if (await findTheoryRow(deps.db, key)) return "cached";
+  if (await hasTheoryRow(deps.db, key)) return "cached";
   let columns;
   try {
     columns = await deps.compute.runTheoryRow({ ensemble: p.ensemble, params: p.params, mus: p.mus, tau: p.tau, kacRice: p.kacRice });

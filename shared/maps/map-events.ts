@@ -22,9 +22,9 @@ export const mapProgressSchema = z.object({
   cellsDone: z.number().int(),
   cellsComputed: z.number().int(),
   cellsFromCache: z.number().int(),
-  /** Cells computed per minute over the last 5 minutes of the map's life; null before any. */
+  /** Cells computed per minute (recent window, as in the map view); null before any. */
   throughput: z.number().nullable(),
-  /** Seconds left at that throughput; null unless queued or running with a throughput. */
+  /** Seconds left at that throughput: 0 when done, null when stopped or not yet known. */
   etaSeconds: z.number().nullable(),
   startedAt: z.string().nullable(),
   finishedAt: z.string().nullable(),

@@ -1,4 +1,4 @@
-import { and, asc, eq, type SQL } from "drizzle-orm";
+import { and, asc, eq, sql, type SQL } from "drizzle-orm";
 import { summarizeCell, type CellSummary } from "../../../shared/maps/cell-summary";
 import type { CellResult } from "../../../shared/schemas/cell-result";
 import type { TheoryColumns } from "../../../shared/schemas/theory";
@@ -21,7 +21,8 @@ function where(mapId: string, f: SummaryFilter): SQL | undefined {
 }
 
 /**
- * CellSummary of map positions (summarizeCell): the dynamics part from the stored result once
+ * CellSummary of map positions (summarizeCell): the dynamics part from the stored result's
+ * aggregate (only that leaves the database) once
  * the position is done, the theory part from its τ row once that row is stored (column i, as
  * the row lists every μ of the map in order). Ordered by j, then i.
  */
@@ -29,7 +30,8 @@ export async function listCellSummaries(db: Executor, mapId: string, filter: Sum
   const rows = await db
     .select({
       i: mapCells.i, j: mapCells.j, mu: mapCells.mu, tau: mapCells.tau, state: mapCells.state,
-      fromCache: mapCells.fromCache, budget: maps.budget, result: cells.result, columns: theoryRows.columns,
+      fromCache: mapCells.fromCache, budget: maps.budget, columns: theoryRows.columns,
+      aggregate: sql<CellResult["aggregate"] | null>`${cells.result} -> 'aggregate'`,
     })
     .from(mapCells)
     .innerJoin(maps, eq(maps.id, mapCells.mapId))
@@ -41,6 +43,6 @@ export async function listCellSummaries(db: Executor, mapId: string, filter: Sum
     const budget = r.budget as { networks: number; starts: number };
     const theory = (r.columns as TheoryColumns[] | null)?.[r.i] ?? null;
     const position = { i: r.i, j: r.j, mu: r.mu, tau: r.tau, state: r.state, fromCache: r.fromCache, networks: budget.networks, starts: budget.starts };
-    return summarizeCell(position, (r.result as CellResult | null) ?? null, theory);
+    return summarizeCell(position, r.aggregate ? { aggregate: r.aggregate } : null, theory);
   });
 }

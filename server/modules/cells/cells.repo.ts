@@ -1,4 +1,4 @@
-import { eq, inArray } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import type { CellInput, CellResult } from "../../../shared/schemas/cell-result";
 import type { TheoryColumns } from "../../../shared/schemas/theory";
 import type { Executor } from "../../db/client";
@@ -6,9 +6,6 @@ import { cells, theoryRows } from "../../db/schema/index";
 
 // The cache of computed cells and theory rows, shared by every map of every account. Rows are
 // written once (INSERT … ON CONFLICT DO NOTHING) and never updated: a key names one result.
-
-export type CellRow = typeof cells.$inferSelect;
-export type TheoryRowRow = typeof theoryRows.$inferSelect;
 
 export interface NewCell {
   key: string;
@@ -18,23 +15,10 @@ export interface NewCell {
   worker: string;
 }
 
-/** The stored cell of `key`, or undefined. */
-export async function findCell(db: Executor, key: string): Promise<CellRow | undefined> {
-  const [row] = await db.select().from(cells).where(eq(cells.key, key));
-  return row;
-}
-
 /** Whether a cell is stored under `key` (reads the key only, not the result). */
 export async function hasCell(db: Executor, key: string): Promise<boolean> {
   const [row] = await db.select({ key: cells.key }).from(cells).where(eq(cells.key, key));
   return row !== undefined;
-}
-
-/** Which of `keys` are stored (one query; for marking cached cells at map creation). */
-export async function storedCellKeys(db: Executor, keys: readonly string[]): Promise<Set<string>> {
-  if (keys.length === 0) return new Set();
-  const rows = await db.select({ key: cells.key }).from(cells).where(inArray(cells.key, [...new Set(keys)]));
-  return new Set(rows.map((r) => r.key));
 }
 
 /**
@@ -60,17 +44,10 @@ export async function storeCell(db: Executor, cell: NewCell): Promise<boolean> {
   return rows.length === 1;
 }
 
-/** The stored theory row of `key`, or undefined. */
-export async function findTheoryRow(db: Executor, key: string): Promise<TheoryRowRow | undefined> {
-  const [row] = await db.select().from(theoryRows).where(eq(theoryRows.key, key));
-  return row;
-}
-
-/** Stored theory rows by key (one query). */
-export async function findTheoryRows(db: Executor, keys: readonly string[]): Promise<Map<string, TheoryColumns[]>> {
-  if (keys.length === 0) return new Map();
-  const rows = await db.select({ key: theoryRows.key, columns: theoryRows.columns }).from(theoryRows).where(inArray(theoryRows.key, [...new Set(keys)]));
-  return new Map(rows.map((r) => [r.key, r.columns as TheoryColumns[]]));
+/** Whether a theory row is stored under `key`. */
+export async function hasTheoryRow(db: Executor, key: string): Promise<boolean> {
+  const [row] = await db.select({ key: theoryRows.key }).from(theoryRows).where(eq(theoryRows.key, key));
+  return row !== undefined;
 }
 
 /**
