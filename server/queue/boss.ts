@@ -85,10 +85,28 @@ export async function createBoss(databaseUrl: string, options: BossOptions = {})
   const ordered = (Object.keys(policies) as QueueName[]).sort((a, b) => Number(!!policies[a].deadLetter) - Number(!!policies[b].deadLetter));
   for (const name of ordered) {
     const queue = { name, policy: "standard" as const, ...policies[name] };
-    await boss.createQueue(name, queue);
+    await retryConcurrentDdl(() => boss.createQueue(name, queue));
     if (options.queues?.[name]) await boss.updateQueue(name, queue);
   }
   return boss;
+}
+
+/**
+ * The web and worker processes start together and both create the queues: PostgreSQL may then
+ * report a deadlock (40P01) or a duplicate (23505) on pg-boss's queue table. Both are harmless
+ * races; try again after a short random pause.
+ */
+async function retryConcurrentDdl(create: () => Promise<unknown>, attempts = 6): Promise<void> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await create();
+      return;
+    } catch (err) {
+      const code = (err as { code?: string }).code;
+      if (attempt >= attempts || (code !== "40P01" && code !== "23505")) throw err;
+      await new Promise((r) => setTimeout(r, 100 + Math.random() * 400));
+    }
+  }
 }
 
 export type { PgBoss };
