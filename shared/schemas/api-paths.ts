@@ -47,6 +47,12 @@ export const apiRoutes = {
     events: "/api/maps/:id/events",
     shared: "/api/shared/:token",
   },
+  probes: {
+    list: "/api/probes",
+    detail: "/api/probes/:id",
+    search: "/api/probes/:id/search",
+    equilibrium: "/api/probes/:id/equilibria/:e",
+  },
 } as const;
 
 const seg = encodeURIComponent;
@@ -85,6 +91,12 @@ export const apiPaths = {
     share: (id: string) => `/api/maps/${seg(id)}/share`,
     events: (id: string) => `/api/maps/${seg(id)}/events`,
     shared: (token: string) => `/api/shared/${seg(token)}`,
+  },
+  probes: {
+    list: apiRoutes.probes.list,
+    detail: (id: string) => `/api/probes/${seg(id)}`,
+    search: (id: string) => `/api/probes/${seg(id)}/search`,
+    equilibrium: (id: string, e: number, format: "csv" | "json" = "json") => `/api/probes/${seg(id)}/equilibria/${e}?format=${format}`,
   },
 } as const;
 
