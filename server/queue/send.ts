@@ -3,8 +3,8 @@ import pg from "pg";
 import type PgBoss from "pg-boss";
 import type { Tx } from "../db/client";
 import {
-  FILL_CELL_EXHAUSTED_QUEUE, FILL_CELL_QUEUE, MAP_FINISHED_QUEUE, THEORY_ROW_QUEUE,
-  fillCellPayloadSchema, mapFinishedPayloadSchema, theoryRowPayloadSchema,
+  FILL_CELL_EXHAUSTED_QUEUE, FILL_CELL_QUEUE, MAP_FINISHED_QUEUE, PROBE_SEARCH_QUEUE, THEORY_ROW_QUEUE,
+  fillCellPayloadSchema, mapFinishedPayloadSchema, probeSearchPayloadSchema, theoryRowPayloadSchema,
   type QueueName, type QueuePayloads,
 } from "./queues";
 
@@ -26,6 +26,7 @@ const payloadSchemas = {
   [FILL_CELL_EXHAUSTED_QUEUE]: fillCellPayloadSchema,
   [THEORY_ROW_QUEUE]: theoryRowPayloadSchema,
   [MAP_FINISHED_QUEUE]: mapFinishedPayloadSchema,
+  [PROBE_SEARCH_QUEUE]: probeSearchPayloadSchema,
 } as const;
 
 function isClient(value: unknown): value is pg.ClientBase {
