@@ -33,13 +33,30 @@ function parseHeader(text: string): { descr: string; fortran: boolean; shape: nu
   return { descr, fortran: fortran === "True", shape };
 }
 
+const KIND_NAMES: Record<string, string> = {
+  c: "complex", i: "integer", u: "unsigned integer", b: "boolean", O: "object", U: "string", S: "bytes", M: "datetime", m: "timedelta", V: "structured",
+};
+
+/**
+ * Accepts '<f8' and '<f4' only; names what else the dtype is (complex, integer, big-endian…).
+ * @throws TypeError naming the dtype's kind or byte order
+ */
+function checkDtype(descr: string): void {
+  if (descr === "<f8" || descr === "<f4") return;
+  const m = /^([<>|=]?)([a-zA-Z])(\d*)$/.exec(descr);
+  const kind = m ? KIND_NAMES[m[2]] : undefined;
+  if (kind) fail(`${kind} dtype '${descr}' (only real float64 '<f8' or float32 '<f4')`);
+  if (m && m[2] === "f" && m[1] === ">") fail(`big-endian dtype '${descr}' (save a little-endian copy: arr.astype('<f${m[3]}'))`);
+  fail(`dtype '${descr}' (only little-endian float64 '<f8' or float32 '<f4')`);
+}
+
 /**
  * Parses a .npy file holding a 1-D or 2-D little-endian float64 ('<f8') or float32 ('<f4')
  * array in C order.
  * @param bytes the whole file
  * @returns shape and data as float64
- * @throws TypeError with a one-line reason for anything else (bad magic, version, dtype,
- *   Fortran order, rank other than 1 or 2, truncated data)
+ * @throws TypeError with a one-line reason for anything else (bad magic, version, dtype — named
+ *   as complex, integer, big-endian… —, Fortran order, rank other than 1 or 2, truncated data)
  */
 export function parseNpy(bytes: Uint8Array): NpyArray {
   if (bytes.length < 10 || MAGIC.some((b, i) => bytes[i] !== b)) fail("missing \\x93NUMPY magic");
@@ -50,15 +67,13 @@ export function parseNpy(bytes: Uint8Array): NpyArray {
   const start = major === 1 ? 10 : 12;
   if (start + headerLen > bytes.length) fail("header runs past the end of the file");
   const header = parseHeader(new TextDecoder(major === 3 ? "utf-8" : "latin1").decode(bytes.subarray(start, start + headerLen)));
-  if (header.descr !== "<f8" && header.descr !== "<f4") {
-    fail(`dtype ${header.descr} (only little-endian float64 '<f8' or float32 '<f4')`);
-  }
+  checkDtype(header.descr);
   if (header.fortran) fail("Fortran order (save a C-ordered array: numpy.ascontiguousarray)");
   if (header.shape.length < 1 || header.shape.length > 2) fail(`rank ${header.shape.length} (only 1-D or 2-D)`);
   const count = header.shape.reduce((a, b) => a * b, 1);
   const width = header.descr === "<f8" ? 8 : 4;
   const offset = start + headerLen;
-  if (bytes.length - offset < count * width) fail(`data holds ${bytes.length - offset} bytes, expected ${count * width}`);
+  if (bytes.length - offset < count * width) fail(`truncated: the data holds ${bytes.length - offset} bytes, the header promises ${count * width}`);
   const data = new Float64Array(count);
   for (let i = 0; i < count; i++) {
     data[i] = width === 8 ? view.getFloat64(offset + 8 * i, true) : view.getFloat32(offset + 4 * i, true);
