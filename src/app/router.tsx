@@ -17,12 +17,17 @@ import { GroupDetailPage, groupDetailLoader } from "./routes/groups/group-detail
 import { GroupsListPage, groupsListLoader } from "./routes/groups/groups-list";
 import { HomePage, homeLoader } from "./routes/home/home";
 import { InvitationPage, invitationLoader } from "./routes/invites/invitation";
+import { CellDetailPage, cellDetailLoader } from "./routes/maps/cell-detail";
+import { MapViewPage, mapViewLoader } from "./routes/maps/map-view";
+import { NewMapPage, newMapLoader } from "./routes/maps/new-map";
+import { SharedCellPage, sharedCellLoader, SharedLayout, SharedMapPage, sharedMapLoader } from "./routes/maps/shared-map";
 import { NotFoundPage } from "./routes/not-found";
 
 /**
  * Every page of the client. Signed-out pages sit at the top; the signed-in area shares the
  * shell (whose loader sends strangers to sign in) and one error boundary inside it, so a
- * failing page keeps the top bar. Later areas (maps, probes, reports) add children here.
+ * failing page keeps the top bar. Read-only map links (/s/:token) have their own bare frame,
+ * open to signed-out readers. Later areas (probes, reports) add children here.
  */
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
   return [
@@ -37,6 +42,19 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
         { path: "reset", element: <ResetPasswordPage /> },
         { path: "invites/:token", loader: invitationLoader(queryClient), element: <InvitationPage /> },
         {
+          path: "s/:token",
+          element: <SharedLayout />,
+          children: [
+            {
+              errorElement: <RouteError />,
+              children: [
+                { index: true, loader: sharedMapLoader(queryClient), element: <SharedMapPage /> },
+                { path: "cells/:i/:j", loader: sharedCellLoader(queryClient), element: <SharedCellPage /> },
+              ],
+            },
+          ],
+        },
+        {
           id: "signed-in",
           loader: requireUser(queryClient),
           element: <AppShell />,
@@ -45,6 +63,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               errorElement: <RouteError />,
               children: [
                 { index: true, loader: homeLoader(queryClient), element: <HomePage /> },
+                { path: "maps/new", loader: newMapLoader(queryClient), element: <NewMapPage /> },
+                { path: "maps/:mapId", loader: mapViewLoader(queryClient), element: <MapViewPage /> },
+                { path: "maps/:mapId/cells/:i/:j", loader: cellDetailLoader(queryClient), element: <CellDetailPage /> },
                 { path: "groups", loader: groupsListLoader(queryClient), element: <GroupsListPage /> },
                 { path: "groups/:groupId", loader: groupDetailLoader(queryClient), element: <GroupDetailPage /> },
                 {

@@ -1,14 +1,15 @@
-import { Link, NavLink } from "react-router-dom";
+import { Link, NavLink, useLocation } from "react-router-dom";
 import type { User } from "../../../shared/schemas";
 import { Wordmark } from "../../components/brand/logo-mark";
 import { cn } from "../../lib/cn";
 import { AccountMenu } from "./account-menu";
 
-type NavItem = { to: string; label: string; end?: boolean };
+/** `section`: further paths that belong to the item (the Maps tab stays lit on /maps/…). */
+type NavItem = { to: string; label: string; end?: boolean; section?: string };
 
 function navItems(user: User): NavItem[] {
   const items: NavItem[] = [
-    { to: "/", label: "Maps", end: true },
+    { to: "/", label: "Maps", end: true, section: "/maps/" },
     { to: "/groups", label: "Groups" },
   ];
   if (user.siteRole === "admin") items.push({ to: "/admin", label: "Admin" });
@@ -17,28 +18,32 @@ function navItems(user: User): NavItem[] {
 
 /** Active tab: white label with a settled ball under it. */
 function NavItems({ items, className }: { items: NavItem[]; className?: string }) {
+  const { pathname } = useLocation();
   return (
     <nav aria-label="Main" className={className}>
-      {items.map((item) => (
-        <NavLink
-          key={item.to}
-          to={item.to}
-          end={item.end}
-          className={({ isActive }) =>
-            cn(
-              "relative flex h-full items-center px-3 text-sm font-medium transition-colors",
-              isActive ? "text-white" : "text-well-200 hover:text-white",
-            )
-          }
-        >
-          {({ isActive }) => (
-            <>
-              {item.label}
-              {isActive && <span aria-hidden="true" className="absolute bottom-1.5 left-1/2 h-1.5 w-1.5 -translate-x-1/2 rounded-full bg-ember-400" />}
-            </>
-          )}
-        </NavLink>
-      ))}
+      {items.map((item) => {
+        const lit = (exact: boolean) => exact || (item.section !== undefined && pathname.startsWith(item.section));
+        return (
+          <NavLink
+            key={item.to}
+            to={item.to}
+            end={item.end}
+            className={({ isActive }) =>
+              cn(
+                "relative flex h-full items-center px-3 text-sm font-medium transition-colors",
+                lit(isActive) ? "text-white" : "text-well-200 hover:text-white",
+              )
+            }
+          >
+            {({ isActive }) => (
+              <>
+                {item.label}
+                {lit(isActive) && <span aria-hidden="true" className="absolute bottom-1.5 left-1/2 h-1.5 w-1.5 -translate-x-1/2 rounded-full bg-ember-400" />}
+              </>
+            )}
+          </NavLink>
+        );
+      })}
     </nav>
   );
 }

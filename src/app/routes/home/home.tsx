@@ -1,8 +1,12 @@
 import type { QueryClient } from "@tanstack/react-query";
 import { useQuery } from "@tanstack/react-query";
-import { Link } from "react-router-dom";
-import { GridSketch } from "../../../components/brand/grid-sketch";
+import { Link, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { buttonClass } from "../../../components/ui/button";
+import { controlClass } from "../../../components/ui/field";
+import { SearchBox } from "../../../components/ui/search-box";
+import { cn } from "../../../lib/cn";
+import { mapQueries, type MapListFilters } from "../../../features/maps/api/map-queries";
+import { MapList } from "../../../features/maps/components/map-list";
 import { Card, CardBody, CardHeader } from "../../../components/ui/card";
 import { LoadingBlock } from "../../../components/ui/spinner";
 import { useSignedInUser } from "../../../features/auth/hooks/use-current-user";
@@ -10,11 +14,14 @@ import { groupQueries } from "../../../features/groups/api/group-queries";
 import { RoleBadge } from "../../../features/groups/components/role-badge";
 import { PageHeader } from "../../../components/ui/page-header";
 
-/** Home starts fetching the groups panel without holding the page back. */
-export const homeLoader = (queryClient: QueryClient) => () => {
-  void queryClient.prefetchQuery(groupQueries.list());
-  return null;
-};
+/** Home waits for the map list it shows first; the groups panel loads alongside. */
+export const homeLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(groupQueries.list());
+    await queryClient.ensureQueryData(mapQueries.list(readFilters(new URL(request.url).searchParams)));
+    return null;
+  };
 
 const EXPLAINERS = [
   {
@@ -31,26 +38,60 @@ const EXPLAINERS = [
   },
 ];
 
+const SCOPES: { id: MapListFilters["scope"]; label: string }[] = [
+  { id: "all", label: "All" },
+  { id: "mine", label: "Mine" },
+  { id: "group", label: "My groups'" },
+  { id: "shared", label: "Shared with me" },
+];
+
+function readFilters(search: URLSearchParams): MapListFilters {
+  const scope = SCOPES.find((s) => s.id === search.get("scope"))?.id ?? "all";
+  const sort = (["newest", "oldest", "title"] as const).find((s) => s === search.get("sort")) ?? "newest";
+  return { scope, sort, q: search.get("q")?.trim() || undefined };
+}
+
 function MapsPanel() {
+  const user = useSignedInUser();
+  const [search, setSearch] = useSearchParams();
+  const filters = readFilters(search);
+  const change = (next: Partial<MapListFilters>) => {
+    const f = { ...filters, ...next };
+    const params = new URLSearchParams();
+    if (f.scope !== "all") params.set("scope", f.scope);
+    if (f.sort !== "newest") params.set("sort", f.sort);
+    if (f.q) params.set("q", f.q);
+    setSearch(params, { replace: true });
+  };
   return (
     <Card className="lg:col-span-2">
-      <CardHeader title="Your maps" description="Maps you made, your groups' maps, and maps shared with you." />
-      <CardBody className="grid grid-cols-1 items-center gap-6 py-8 sm:grid-cols-[minmax(0,1fr)_minmax(0,15rem)]">
-        <div>
-          <h3 className="text-base font-semibold text-ink">No maps yet</h3>
-          <p className="mt-1.5 text-sm leading-relaxed text-ink-soft">
-            Building maps arrives in the next release. Once it does, each map appears here with its status, progress and a
-            thumbnail of its heatmap.
-          </p>
-          <p className="mt-3 text-sm text-ink-soft">Meanwhile, set up a group so your colleagues can share maps with you from day one.</p>
-          <Link to="/groups" className={buttonClass("secondary", "sm", "mt-4")}>
-            Set up a group
-          </Link>
+      <CardHeader title="Maps" description="Maps you made, your groups' maps, and maps shared with you." actions={<Link to="/maps/new" className={buttonClass("primary", "sm")}>New map</Link>} />
+      <div className="flex flex-col gap-3 border-b border-line px-5 py-3 sm:flex-row sm:items-center sm:justify-between">
+        <div role="tablist" aria-label="Which maps" className="flex flex-wrap gap-1">
+          {SCOPES.map((s) => (
+            <button
+              key={s.id}
+              type="button"
+              role="tab"
+              aria-selected={filters.scope === s.id}
+              onClick={() => change({ scope: s.id })}
+              className={cn("rounded-full px-3 py-1 text-sm", filters.scope === s.id ? "bg-well-700 text-white" : "text-ink-soft hover:bg-well-50")}
+            >
+              {s.label}
+            </button>
+          ))}
         </div>
-        <figure className="rounded-xl bg-paper p-3 ring-1 ring-line">
-          <GridSketch />
-          <figcaption className="mt-1 text-center text-[0.7rem] text-ink-faint">Illustration, not computed data</figcaption>
-        </figure>
+        <div className="flex gap-2">
+          <SearchBox value={filters.q ?? ""} onSearch={(q) => change({ q: q || undefined })} label="Search maps" placeholder="Search maps" className="sm:w-52" />
+          <select aria-label="Sort maps" value={filters.sort} onChange={(e) => change({ sort: e.target.value as MapListFilters["sort"] })} className={cn(controlClass(false), "w-auto pr-8")}>
+            <option value="newest">Newest</option>
+            <option value="oldest">Oldest</option>
+            <option value="title">Title</option>
+          </select>
+        </div>
+      </div>
+      <CardBody>
+        <MapList filters={filters} myId={user.id} />
       </CardBody>
     </Card>
   );
@@ -102,7 +143,7 @@ export function HomePage() {
       </div>
       <section aria-labelledby="what-a-map-shows" className="mt-10">
         <h2 id="what-a-map-shows" className="text-sm font-semibold tracking-[0.12em] text-well-500 uppercase">
-          What a map will show
+          What a map shows
         </h2>
         <div className="mt-4 grid grid-cols-1 gap-4 md:grid-cols-3">
           {EXPLAINERS.map((e, i) => (
@@ -113,7 +154,7 @@ export function HomePage() {
             </div>
           ))}
         </div>
-        <p className="mt-4 text-xs text-ink-faint">Every estimate will carry its sample size and confidence interval.</p>
+        <p className="mt-4 text-xs text-ink-faint">Every estimate carries its sample size and confidence interval.</p>
       </section>
     </>
   );

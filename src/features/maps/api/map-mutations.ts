@@ -34,8 +34,17 @@ export function useUpdateMap(id: string) {
   return useMapWrite(id, (body: UpdateMap) => api.patch<MapView>(apiPaths.maps.detail(id), body), "Map updated.");
 }
 
+/** Cancelling also changes the pending cells' state, so the grid is refetched too. */
 export function useCancelMap(id: string) {
-  return useMapWrite(id, () => api.post<MapView>(apiPaths.maps.cancel(id)), "Map cancelled; finished cells are kept.");
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post<MapView>(apiPaths.maps.cancel(id)),
+    onSuccess: (map) => {
+      queryClient.setQueryData(mapKeys.detail(id), map);
+      return Promise.all([queryClient.invalidateQueries({ queryKey: mapKeys.grid(id) }), queryClient.invalidateQueries({ queryKey: mapKeys.lists() })]);
+    },
+    meta: { successMessage: "Map cancelled; finished cells are kept." },
+  });
 }
 
 /** Creates (or returns) the read-only link; the map's detail then carries the token. */
