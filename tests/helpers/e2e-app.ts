@@ -7,6 +7,10 @@ import { createApp, type AppHandle } from "../../server/app";
 import { openDatabase } from "../../server/db/client";
 import { users } from "../../server/db/schema/index";
 import { seedDemoLab } from "../../server/db/seed/demo-lab";
+import { createComputePool, type ComputePool } from "../../server/jobs/compute-pool";
+import { startJobWorkers, type JobWorkers } from "../../server/jobs/job-workers";
+import { logger } from "../../server/lib/logger";
+import { createBoss, type PgBoss } from "../../server/queue/boss";
 import { startFakeSmtp } from "../../server/mail/fake-smtp";
 import { createMailer } from "../../server/mail/mailer";
 import { insertOutboxMessage } from "../../server/mail/outbox.repo";
@@ -18,9 +22,10 @@ export const DIST_DIR = path.resolve(import.meta.dirname, "../../dist");
 /**
  * The real product for browser tests: createApp with the built client from dist/, on an
  * ephemeral loopback port, a fresh clone of the migrated test database, and the SMTP fake
- * (port 0) storing mail in the outbox, exactly as `npm start` wires them.
+ * (port 0) storing mail in the outbox, exactly as `npm start` wires them. With `worker: true`
+ * the app also gets pg-boss and an in-process map worker (one engine thread), so maps fill.
  */
-export async function startE2eApp(options: { clientDir?: string } = {}) {
+export async function startE2eApp(options: { clientDir?: string; worker?: boolean } = {}) {
   const clientDir = options.clientDir ?? DIST_DIR;
   if (!existsSync(path.join(clientDir, "index.html"))) {
     throw new Error(`${clientDir}/index.html is missing: build the client first (\`npx vite build\`; \`npm test\` does it)`);
@@ -30,12 +35,22 @@ export async function startE2eApp(options: { clientDir?: string } = {}) {
   const smtp = await startFakeSmtp({ port: 0, onMessage: (m) => insertOutboxMessage(database.db, m) });
   const mailer = createMailer({ host: "127.0.0.1", port: smtp.port, from: "Equilibrist <no-reply@equilibrist.test>" });
 
+  let boss: PgBoss | undefined;
+  let compute: ComputePool | undefined;
+  let workers: JobWorkers | undefined;
+  if (options.worker) {
+    boss = await createBoss(testDb.url, { max: 4, maintenanceIntervalSeconds: 5, applicationName: "equilibrist-e2e" });
+    compute = createComputePool({ threads: 1 });
+    workers = await startJobWorkers({ db: database.db, boss, compute, workerName: "e2e-worker", logger, pollingIntervalSeconds: 0.5 });
+  }
+
   const server = http.createServer();
   await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
   const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   const handle: AppHandle = createApp({
     database,
     mailer,
+    boss,
     clientDir,
     config: { appUrl: baseUrl, sessionSecret: "e2e-session-secret-0123456789abcdef" },
   });
@@ -57,6 +72,9 @@ export async function startE2eApp(options: { clientDir?: string } = {}) {
         server.closeAllConnections();
       });
       await handle.close();
+      await workers?.stop();
+      await boss?.stop({ graceful: false, close: true, wait: true });
+      await compute?.close();
       mailer.close();
       await smtp.close();
       await database.close();
