@@ -53,6 +53,17 @@ export const apiRoutes = {
     search: "/api/probes/:id/search",
     equilibrium: "/api/probes/:id/equilibria/:e",
   },
+  review: {
+    replicate: "/api/maps/:id/replicate",
+    compare: "/api/maps/:id/compare/:otherId",
+    boundary: "/api/maps/:id/boundary",
+    report: "/api/maps/:id/report",
+    import: "/api/maps/import",
+    about: "/api/about",
+  },
+  account: {
+    preferences: "/api/account/preferences",
+  },
 } as const;
 
 const seg = encodeURIComponent;
@@ -98,6 +109,15 @@ export const apiPaths = {
     search: (id: string) => `/api/probes/${seg(id)}/search`,
     equilibrium: (id: string, e: number, format: "csv" | "json" = "json") => `/api/probes/${seg(id)}/equilibria/${e}?format=${format}`,
   },
+  review: {
+    replicate: (id: string) => `/api/maps/${seg(id)}/replicate`,
+    compare: (id: string, otherId: string) => `/api/maps/${seg(id)}/compare/${seg(otherId)}`,
+    boundary: (id: string) => `/api/maps/${seg(id)}/boundary`,
+    report: (id: string) => `/api/maps/${seg(id)}/report`,
+    import: apiRoutes.review.import,
+    about: apiRoutes.review.about,
+  },
+  account: apiRoutes.account,
 } as const;
 
 /** Client pages that e-mails link to (the server builds `${APP_URL}${page}`). */
@@ -106,4 +126,6 @@ export const pagePaths = {
   invite: (token: string) => `/invites/${seg(token)}`,
   /** Read-only view of a shared map for signed-out readers. */
   sharedMap: (token: string) => `/s/${seg(token)}`,
+  /** A map's page (the "map finished" e-mail links here). */
+  map: (id: string) => `/maps/${seg(id)}`,
 } as const;
