@@ -13,6 +13,8 @@ export interface DeflationOptions {
   tol?: number;
   /** Give up when ‖x‖∞ exceeds this (the iterate left the region of interest). Default Infinity. */
   bound?: number;
+  /** Step halvings of the line search before giving up this attempt. Default 6. */
+  maxHalvings?: number;
 }
 
 export interface DeflatedResult {
@@ -33,7 +35,7 @@ export interface DeflatedResult {
  * @param network the system F
  * @param x0 starting point
  * @param known roots already found (deflated)
- * @param options power (2), shift (1), maxIterations (100), tol (1e-11), bound (∞)
+ * @param options power (2), shift (1), maxIterations (100), tol (1e-11), bound (∞), maxHalvings (6)
  * @returns the last iterate and whether ‖F‖∞ < tol there
  * @throws RangeError when x0 has the wrong length
  */
@@ -50,6 +52,7 @@ export function deflatedNewton(
   const maxIterations = options.maxIterations ?? 100;
   const tol = options.tol ?? 1e-11;
   const bound = options.bound ?? Infinity;
+  const maxHalvings = options.maxHalvings ?? 6;
   const x = Float64Array.from(x0);
   const f = new Float64Array(n);
   const minusF = new Float64Array(n);
@@ -73,7 +76,7 @@ export function deflatedNewton(
     if (!Number.isFinite(scale)) break;
     let alpha = 1;
     let accepted = false;
-    for (let h = 0; h < 20 && !accepted; h++, alpha /= 2) {
+    for (let h = 0; h < maxHalvings && !accepted; h++, alpha /= 2) {
       for (let i = 0; i < n; i++) xTrial[i] = x[i] + alpha * scale * step[i];
       network.rhs(xTrial, fTrial);
       const m = logMerit(xTrial, fTrial, known, p, s);

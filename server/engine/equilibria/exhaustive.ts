@@ -4,11 +4,12 @@ import { deflatedNewton } from "./deflation";
 import { analyseEquilibrium } from "./equilibrium";
 import { EquilibriumSet } from "./equilibrium-set";
 import { refineEquilibrium } from "./newton";
+import { normInf } from "../linalg/vector";
 
 export interface ExhaustiveOptions {
   /** Random starts (uniform in the box). Default 40·N + 40. */
   starts?: number;
-  /** Further deflated restarts from the same start after each new root. Default 1. */
+  /** Deflated attempts from each start after the plain one (stops at the first failure). Default 1. */
   restartsPerStart?: number;
   /** Half-width of the box of starts, in units of the estimated scale of f/μ. Default 5. */
   boxScale?: number;
@@ -22,8 +23,10 @@ export interface ExhaustiveOptions {
   maxN?: number;
   /** Relative merge distance. Default 1e-6. */
   mergeTol?: number;
-  /** Deflated Newton iterations per attempt. Default 30. */
+  /** Newton iterations per attempt (plain and deflated). Default 15. */
   maxIterations?: number;
+  /** Candidate points drawn per start; the starts are the candidates of smallest ‖F‖∞. Default 2. */
+  oversample?: number;
 }
 
 export interface ExhaustiveResult {
@@ -55,15 +58,39 @@ function fieldScale(network: Network, seed: number, stream: number): number {
 }
 
 /**
+ * Starts of the search: `oversample`·starts uniform points of the box, of which the `starts`
+ * with the smallest ‖F‖∞ are kept (one evaluation each, far cheaper than a Newton attempt), in
+ * order of increasing residual.
+ */
+function candidateStarts(network: Network, box: number, starts: number, oversample: number, seed: number, stream: number): Float64Array[] {
+  if (!Number.isSafeInteger(oversample) || oversample < 1) throw new RangeError(`oversample must be a positive integer, got ${oversample}`);
+  const n = network.n;
+  const rng = createRng(seed, 0xe4a5, stream);
+  const f = new Float64Array(n);
+  const pool: { x: Float64Array; r: number; i: number }[] = [];
+  for (let i = 0; i < starts * oversample; i++) {
+    const x = Float64Array.from({ length: n }, () => box * (2 * rng.uniform() - 1));
+    network.rhs(x, f);
+    const r = normInf(f);
+    pool.push({ x, r: Number.isFinite(r) ? r : Infinity, i });
+  }
+  pool.sort((a, b) => a.r - b.r || a.i - b.i);
+  return pool.slice(0, starts).map((p) => p.x);
+}
+
+/**
  * Searches for all equilibria (stable and unstable) of a small network: deflated Newton
- * (Farrell, Birkisson & Funke, SIAM J. Sci. Comput. 37 (2015) A2026) from uniform random
- * starts in the box [−B, B]^N, restarting from the same start after each new root; every root is
+ * (Farrell, Birkisson & Funke, SIAM J. Sci. Comput. 37 (2015) A2026), after a plain damped
+ * Newton attempt, from uniform random
+ * starts in the box [−B, B]^N (the lowest-residual half of twice as many uniform points),
+ * with further deflated attempts from the same start while they find new roots; every root is
  * polished by plain Newton, verified (‖F‖∞ < 1e-10), merged and analysed. The box: B =
  * boxScale · σ_f / μ with σ_f the sampled standard deviation of the components of f = F + μx
  * (equilibria satisfy x = f(x)/μ; with boxScale 5 a Gaussian f_i exceeds the box with
  * probability 6e-7 per component). Found counts are lower bounds of the true number.
  * @param network the system (N ≤ maxN)
- * @param options starts (40N + 40), restartsPerStart (4), boxScale (5) or box, seed (0), maxN (10)
+ * @param options starts (40N + 40), oversample (2), restartsPerStart (1), maxIterations (15),
+ *   boxScale (5) or box, seed (0), stream (0), maxN (10)
  * @returns the distinct verified equilibria with the box and effort
  * @throws RangeError when N > maxN or an option is out of range
  */
@@ -78,13 +105,19 @@ export function findAllEquilibria(network: Network, options: ExhaustiveOptions =
   if (!(box > 0) || !Number.isFinite(box)) throw new RangeError(`box must be positive and finite, got ${box}`);
   const set = new EquilibriumSet(options.mergeTol);
   const roots: Float64Array[] = [];
-  const rng = createRng(seed, 0xe4a5, options.stream ?? 0);
-  const x0 = new Float64Array(n);
+  const points = candidateStarts(network, box, starts, options.oversample ?? 2, seed, options.stream ?? 0);
   let iterations = 0;
-  for (let s = 0; s < starts; s++) {
-    for (let i = 0; i < n; i++) x0[i] = box * (2 * rng.uniform() - 1);
-    for (let r = 0; r <= (options.restartsPerStart ?? 1); r++) {
-      const d = deflatedNewton(network, x0, roots, { bound: 4 * box, maxIterations: options.maxIterations ?? 30 });
+  const maxIterations = options.maxIterations ?? 15;
+  for (const x0 of points) {
+    // Plain damped Newton first: it reaches the root whose basin holds x0, deflated or not.
+    const plain = refineEquilibrium(network, x0, { maxIterations, maxHalvings: 6 });
+    iterations += plain.iterations;
+    if (plain.converged && set.find(plain.x) < 0) {
+      set.add(analyseEquilibrium(network, plain.x, plain.residual));
+      roots.push(plain.x);
+    }
+    for (let r = 0; r < (options.restartsPerStart ?? 1); r++) {
+      const d = deflatedNewton(network, x0, roots, { bound: 4 * box, maxIterations });
       iterations += d.iterations;
       if (!d.converged) break;
       const polished = refineEquilibrium(network, d.x);
