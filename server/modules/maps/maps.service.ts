@@ -69,8 +69,11 @@ export class MapsService {
     return { ...readable, actor: me };
   }
 
-  /** Validates limits and group rights, plans every cell; estimateOnly stops after the estimate. */
-  async create(actor: Reader, body: CreateMap): Promise<CreateMapAnswer> {
+  /**
+   * Validates limits and group rights, plans every cell; estimateOnly stops after the estimate.
+   * `origin.replicateOf` links a replicate to the map it re-runs (review module).
+   */
+  async create(actor: Reader, body: CreateMap, origin: { replicateOf?: string } = {}): Promise<CreateMapAnswer> {
     const me = requireActor(actor);
     const issues = limitIssues(body, me.siteRole);
     if (issues.length > 0) throw limitError(issues);
@@ -81,7 +84,7 @@ export class MapsService {
       const cached = await cellsRepo.storedCellKeys(this.deps.db, plan.cells.map((c) => c.cellKey));
       return this.estimate(spec, plan, cached);
     }
-    const { id, estimate } = await this.deps.db.transaction((tx) => this.insertPlanned(tx, me, body, plan));
+    const { id, estimate } = await this.deps.db.transaction((tx) => this.insertPlanned(tx, me, body, plan, origin.replicateOf ?? null));
     const { record, access } = await this.getReadable(me, id);
     return { ...toMapView(record, access), ...estimate };
   }
@@ -92,7 +95,7 @@ export class MapsService {
   }
 
   /** The map, its positions (cached ones done) and the jobs for the rest, in `tx`. */
-  private async insertPlanned(tx: Tx, me: Actor, body: CreateMap, plan: MapPlan) {
+  private async insertPlanned(tx: Tx, me: Actor, body: CreateMap, plan: MapPlan, replicateOf: string | null) {
     await repo.lockOwner(tx, me.id);
     const cached = await cellsRepo.storedCellKeys(tx, plan.cells.map((c) => c.cellKey));
     const estimate = this.estimate(specOf(body), plan, cached);
@@ -106,6 +109,7 @@ export class MapsService {
       settings: body.settings, muAxis: body.mu, tauAxis: body.tau, budget: body.budget, seed: body.seed,
       status: allCached ? "done" : "queued", cellsTotal: estimate.cells, cellsDone: estimate.cachedCells,
       cellsFromCache: estimate.cachedCells, startedAt: allCached ? now : null, finishedAt: allCached ? now : null,
+      replicateOf,
     });
     const missing = plan.cells.filter((c) => !cached.has(c.cellKey));
     const storedRows = await cellsRepo.storedTheoryKeys(tx, plan.theoryRows.map((t) => t.theoryKey));
