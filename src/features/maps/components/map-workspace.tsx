@@ -36,9 +36,16 @@ export function MapWorkspace({ map, grid, layer, onLayer, onOpenCell, share }: M
   const matched = criteria.length ? model.cells.filter((c) => matchesCriteria(c, criteria)).length : 0;
   const computed = model.cells.filter((c) => c?.state === "done").length;
 
+  // Phones read top to bottom: layer, figure, curves and filter, read-out. Wide screens put the
+  // figure on the left across all rows and the three panels beside it.
   return (
-    <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_19rem]">
-      <div className="flex min-w-0 flex-col gap-4">
+    <div className="grid grid-cols-1 items-start gap-4 lg:grid-cols-[minmax(0,1fr)_19rem] lg:grid-rows-[auto_auto_1fr] lg:gap-x-6">
+      <Card className="lg:col-start-2 lg:row-start-1">
+        <CardBody>
+          <LayerPicker ensemble={map.ensemble} value={layerId} onChange={onLayer} />
+        </CardBody>
+      </Card>
+      <div className="flex min-w-0 flex-col gap-4 lg:col-start-1 lg:row-span-3 lg:row-start-1">
         <Card className="overflow-hidden">
           <div ref={box} className="w-full">
             <MapFigure map={map} grid={model} layerId={layerId} criteria={criteria} curves={curves} width={width} onOpen={onOpenCell} onHover={setHover} svgRef={figure} />
@@ -49,21 +56,18 @@ export function MapWorkspace({ map, grid, layer, onLayer, onOpenCell, share }: M
           <ExportButtons mapId={map.id} title={map.title} layerLabel={layers[layerId].label} figure={figure} share={share} />
         </div>
       </div>
-      <div className="flex flex-col gap-4 lg:sticky lg:top-20">
-        <Card>
-          <CardBody className="flex flex-col gap-5">
-            <LayerPicker ensemble={map.ensemble} value={layerId} onChange={onLayer} />
-            <CurveToggles map={map} shown={curves} onChange={setCurves} />
-            <FilterPanel ensemble={map.ensemble} criteria={criteria} onChange={setCriteria} matched={matched} computed={computed} />
-          </CardBody>
-        </Card>
-        <Card aria-label="Cell read-out">
-          <CardBody>
-            <h3 className="mb-2 text-sm font-semibold text-ink">Cell read-out</h3>
-            <CellReadout cell={hover === null ? undefined : model.cells[hover]} muCritical={map.muCritical} />
-          </CardBody>
-        </Card>
-      </div>
+      <Card className="lg:col-start-2 lg:row-start-2">
+        <CardBody className="flex flex-col gap-5">
+          <CurveToggles map={map} shown={curves} onChange={setCurves} />
+          <FilterPanel ensemble={map.ensemble} criteria={criteria} onChange={setCriteria} matched={matched} computed={computed} />
+        </CardBody>
+      </Card>
+      <Card aria-label="Cell read-out" className="lg:col-start-2 lg:row-start-3">
+        <CardBody>
+          <h3 className="mb-2 text-sm font-semibold text-ink">Cell read-out</h3>
+          <CellReadout cell={hover === null ? undefined : model.cells[hover]} muCritical={map.muCritical} />
+        </CardBody>
+      </Card>
     </div>
   );
 }

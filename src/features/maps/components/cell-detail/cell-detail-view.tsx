@@ -15,16 +15,19 @@ import { TracePlot } from "./trace-plot";
 type Result = NonNullable<MapCellDetail["result"]>;
 
 function NetworksCard({ result }: { result: Result }) {
-  const [k, setK] = useState(0);
+  // Start on the first network that reached any equilibrium: an empty table says little.
+  const [k, setK] = useState(() => Math.max(0, result.networks.findIndex((n) => n.stable.length + n.unstable.length > 0)));
   const net = result.networks[Math.min(k, result.networks.length - 1)];
-  const options = result.networks.map((n) => ({ value: String(n.k), label: `Network ${n.k}: ${n.stable.length} stable, ${n.unstable.length} unstable reached` }));
+  const options = result.networks.map((n) => ({ value: String(n.k), label: `Network ${n.k} · ${n.stable.length} stable · ${n.unstable.length} unstable` }));
   return (
     <Card>
       <CardHeader
         title="Equilibria per network"
         description="Every distinct fixed point the runs of one network reached, refined and verified by Newton's method. Found ones only: a lower bound."
-        actions={<SelectField label="Network" className="w-64 max-w-full" value={String(net.k)} onChange={(e) => setK(Number(e.target.value))} options={options} />}
       />
+      <CardBody className="border-b border-line">
+        <SelectField label="Network" className="max-w-sm" value={String(net.k)} onChange={(e) => setK(Number(e.target.value))} options={options} />
+      </CardBody>
       <EquilibriaTable network={net} />
       <CardBody className="border-t border-line text-xs text-ink-soft">
         Chao1 estimate for this network: {net.chao1.estimate.toFixed(2)} stable states ({net.chao1.observed} found, {net.chao1.f1} seen once, {net.chao1.f2} seen twice)
@@ -37,7 +40,7 @@ function NetworksCard({ result }: { result: Result }) {
 /** Everything stored for one cell: its numbers, networks, traces, spectrum, settle times and run classes. */
 export function CellDetailView({ map, detail }: { map: MapView; detail: MapCellDetail }) {
   const box = useRef<HTMLDivElement>(null);
-  const width = Math.min(useElementWidth(box, 560), 720);
+  const width = Math.min(useElementWidth(box, 560), 960);
   const r = detail.result;
   const saveJson = () =>
     downloadBlob(new Blob([JSON.stringify({ map: { id: map.id, title: map.title }, ...detail }, null, 2)], { type: "application/json" }), `${fileSlug(map.title)}-cell-${detail.summary.i}-${detail.summary.j}.json`);

@@ -23,13 +23,14 @@ export function CurveLayer({ curves, shown, x, y, clipId }: CurveLayerProps) {
         .filter((c) => shown.has(c.id))
         .map((c) => {
           const pts = c.points.map((p) => (p.mu > 0 && inDomain(x, p.mu) && inDomain(y, p.tau) ? { x: x(p.mu) ?? NaN, y: y(p.tau) ?? NaN } : null));
-          const last = [...pts].reverse().find((p) => p !== null);
+          // m = 1 is labelled at its foot, so it does not sit on m_st(τ)'s label where both meet at τ = 1.
+          const labelAt = c.id === "m-one" ? pts.find((p) => p !== null) : [...pts].reverse().find((p) => p !== null);
           return (
             <g key={c.id} data-curve={c.id}>
               <path d={polylinePath(pts)} fill="none" stroke="#fffdf8" strokeWidth={4.5} strokeOpacity={0.8} strokeLinejoin="round" />
               <path d={polylinePath(pts)} fill="none" stroke={c.color} strokeWidth={2} strokeDasharray={c.dash || undefined} strokeLinejoin="round" />
-              {last && (
-                <text x={last.x + 4} y={last.y + 12} fill={c.color} fontSize={11} fontFamily={FONT} fontWeight={600} stroke="#fffdf8" strokeWidth={3} paintOrder="stroke">
+              {labelAt && (
+                <text x={labelAt.x + 4} y={c.id === "m-one" ? labelAt.y - 6 : labelAt.y + 12} fill={c.color} fontSize={11} fontFamily={FONT} fontWeight={600} stroke="#fffdf8" strokeWidth={3} paintOrder="stroke">
                   {c.label}
                 </text>
               )}

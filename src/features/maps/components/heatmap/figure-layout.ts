@@ -14,6 +14,8 @@ export interface FigureLayout {
   legendWidth: number;
   settingsTop: number;
   settings: string[];
+  /** The line under the title, wrapped to the width. */
+  subtitle: string[];
 }
 
 /**
@@ -21,16 +23,18 @@ export interface FigureLayout {
  * the colour key under it, and the settings line last. Cells stay roughly square up to a
  * comfortable height.
  */
-export function figureLayout(width: number, steps: { mu: number; tau: number }, hasMAxis: boolean, scale: LayerScale, settings: string[]): FigureLayout {
+export function figureLayout(width: number, steps: { mu: number; tau: number }, hasMAxis: boolean, scale: LayerScale, text: { settings: string[]; subtitle: string[] }): FigureLayout {
   const left = 64;
   const right = 18;
+  const chars = Math.max(30, Math.floor((width - 24) / 6.1));
+  const subtitle = wrapParts(text.subtitle, chars);
   const plotWidth = Math.max(120, width - left - right);
-  const plotTop = 50 + (hasMAxis ? 40 : 6);
+  const plotTop = 36 + subtitle.length * 15 + (hasMAxis ? 40 : 6);
   const plotHeight = Math.round(Math.min(440, Math.max(180, (plotWidth * steps.tau) / steps.mu)));
   const legendTop = plotTop + plotHeight + 52;
   const legendWidth = plotWidth;
   const settingsTop = legendTop + legendLayout(scale, legendWidth).height + 4;
-  const lines = wrapParts(settings, Math.max(30, Math.floor((width - 24) / 6.1)));
+  const lines = wrapParts(text.settings, chars);
   return {
     width,
     height: settingsTop + lines.length * 14 + 10,
@@ -42,5 +46,6 @@ export function figureLayout(width: number, steps: { mu: number; tau: number }, 
     legendWidth,
     settingsTop,
     settings: lines,
+    subtitle,
   };
 }

@@ -57,11 +57,12 @@ export const MapFigure = memo(function MapFigure({ map, grid, layerId, criteria,
   const scale = useMemo(() => layerScale(layerId, values), [layerId, values]);
   const paints = useMemo(() => cellPaints(grid, layerId, values, scale, criteria, ids), [grid, layerId, values, scale, criteria, ids]);
   const settings = useMemo(() => settingsLine(map), [map]);
-  const L = figureLayout(width, { mu: grid.muSteps, tau: grid.tauSteps }, map.muCritical != null, scale, settings);
+  const counts = stateCounts(grid);
+  const subtitle = [`${scale.layer.label} over relaxation rate μ and asymmetry τ`, `${counts.done} of ${grid.cells.length} cells computed`];
+  const L = figureLayout(width, { mu: grid.muSteps, tau: grid.tauSteps }, map.muCritical != null, scale, { settings, subtitle });
   const x = useMemo(() => axisScale(map.mu, [0, L.plotWidth]), [map.mu, L.plotWidth]);
   const y = useMemo(() => axisScale(map.tau, [L.plotHeight, 0]), [map.tau, L.plotHeight]);
   const curveList = useMemo(() => overlayCurves(map, y.domain() as [number, number]), [map, y]);
-  const counts = stateCounts(grid);
   const extras = { pending: counts.pending > 0, failed: counts.failed > 0, empty: Array.from(values).some((v, k) => Number.isNaN(v) && grid.cells[k]?.state === "done") || counts.cancelled > 0 };
 
   const cellsRef = useRef<SVGGElement>(null);
@@ -90,9 +91,11 @@ export const MapFigure = memo(function MapFigure({ map, grid, layerId, criteria,
       <text x={12} y={22} fontSize={16} fontWeight={600} fill={SPECIAL_FILLS.ink}>
         {map.title}
       </text>
-      <text x={12} y={40} fontSize={12} fill={SPECIAL_FILLS.inkSoft}>
-        {`${scale.layer.label} over relaxation rate μ and asymmetry τ · ${counts.done} of ${grid.cells.length} cells computed`}
-      </text>
+      {L.subtitle.map((line, k) => (
+        <text key={k} x={12} y={40 + k * 15} fontSize={12} fill={SPECIAL_FILLS.inkSoft}>
+          {line}
+        </text>
+      ))}
       <g transform={`translate(${L.left},${L.plotTop})`}>
         <clipPath id={ids.clip}>
           <rect width={L.plotWidth} height={L.plotHeight} />

@@ -25,7 +25,8 @@ function Figure({ label, value, note }: { label: string; value: string; note?: s
  */
 export function EstimatePanel({ form }: { form: MapForm }) {
   const values = useWatch({ control: form.control });
-  const parsed = createMapSchema.safeParse(values);
+  // The title does not change the cost: estimate before one is typed.
+  const parsed = createMapSchema.safeParse({ ...values, title: values.title?.trim() || "Untitled" });
   const body = useDebouncedValue<CreateMap | null>(parsed.success ? { ...parsed.data, estimateOnly: undefined } : null, 500);
   const estimate = useQuery({ ...mapQueries.estimate(body as CreateMap), enabled: body !== null });
   const steps = (values.mu?.steps ?? 0) * (values.tau?.steps ?? 0);
