@@ -75,20 +75,39 @@ export async function sendInTransaction<Q extends QueueName>(
   return sent;
 }
 
+export interface SendManyOptions<P> extends Omit<JobSendOptions, "id"> {
+  /**
+   * Seconds each job may stay active before pg-boss hands it to another worker, per payload
+   * (e.g. a multiple of the cell's estimated compute time); default: the queue's policy. Whole
+   * seconds from 1 to 23 hours (pg-boss's limit is under 24 h).
+   */
+  expireInSeconds?: (payload: P, index: number) => number;
+}
+
+const MAX_EXPIRE_SECONDS = 23 * 3600;
+
+function expiry(seconds: number): number {
+  if (!Number.isFinite(seconds) || seconds < 1) throw new RangeError(`expireInSeconds must be ≥ 1, got ${seconds}`);
+  return Math.min(Math.ceil(seconds), MAX_EXPIRE_SECONDS);
+}
+
 /**
  * Enqueues many jobs in one statement inside the caller's transaction (pg-boss `insert` with
  * the `db` option). Ids are generated here so they come back in the order of `payloads`.
  * @returns job ids, one per payload, in order
- * @throws ZodError on a bad payload (nothing is sent then)
+ * @throws ZodError on a bad payload, RangeError on a bad expiry (nothing is sent then)
  */
 export async function sendMany<Q extends QueueName>(
-  boss: PgBoss, tx: QueueTx, queue: Q, payloads: QueuePayloads[Q][], options: Omit<JobSendOptions, "id"> = {},
+  boss: PgBoss, tx: QueueTx, queue: Q, payloads: QueuePayloads[Q][], options: SendManyOptions<QueuePayloads[Q]> = {},
 ): Promise<string[]> {
   const checked = payloads.map((p) => checkPayload(queue, p));
   if (checked.length === 0) return [];
   const ids = checked.map(() => randomUUID());
   const startAfter = options.startAfter instanceof Date ? options.startAfter.toISOString() : options.startAfter === undefined ? undefined : `${options.startAfter} seconds`;
-  const jobs = checked.map((data, k) => ({ id: ids[k], name: queue, data: data as object, priority: options.priority, startAfter }));
+  const jobs = checked.map((data, k) => ({
+    id: ids[k], name: queue, data: data as object, priority: options.priority, startAfter,
+    expireInSeconds: options.expireInSeconds ? expiry(options.expireInSeconds(data, k)) : undefined,
+  }));
   await boss.insert(jobs, { db: transactionDb(tx) });
   return ids;
 }
