@@ -1,6 +1,6 @@
 import type { OdeSystem } from "../integrate/types";
 import { integrate } from "../integrate/integrate";
-import { emptyCounters, addCounters, type IntegrationCounters } from "../integrate/types";
+import { emptyCounters, addCounters, type BatchRhs, type IntegrationCounters } from "../integrate/types";
 
 export interface LyapunovOptions {
   /** Length of the probe window (time units). Default 40. */
@@ -29,12 +29,14 @@ export interface LyapunovEstimate {
   finite: boolean;
 }
 
-/** The pair system (x, y) ↦ (F(x), F(y)) of dimension 2n. */
-function pairSystem(system: OdeSystem): OdeSystem {
+/** The pair system (x, y) ↦ (F(x), F(y)) of dimension 2n (one batch of two rows when possible). */
+function pairSystem(system: OdeSystem & Partial<BatchRhs>): OdeSystem {
   const n = system.n;
+  const batch = system.rhsBatch?.bind(system);
   return {
     n: 2 * n,
     rhs(z, out) {
+      if (batch) return batch(z, out, 2);
       system.rhs(z.subarray(0, n), out.subarray(0, n));
       system.rhs(z.subarray(n), out.subarray(n));
     },
@@ -56,7 +58,7 @@ function pairSystem(system: OdeSystem): OdeSystem {
  * @returns the estimate, its window, counters and the final state
  * @throws RangeError on non-positive duration or interval, or a bad x0 length
  */
-export function estimateLyapunov(system: OdeSystem, x0: Float64Array, options: LyapunovOptions = {}): LyapunovEstimate {
+export function estimateLyapunov(system: OdeSystem & Partial<BatchRhs>, x0: Float64Array, options: LyapunovOptions = {}): LyapunovEstimate {
   const n = system.n;
   const duration = options.duration ?? 40;
   const interval = options.interval ?? 1;

@@ -2,7 +2,7 @@ import type { Network } from "../ensembles/ensemble";
 import { estimateLyapunov } from "./lyapunov";
 import type { EquilibriumSet } from "./equilibrium-set";
 import type { RunSettings } from "./run-settings";
-import { emptyCounters, addCounters } from "../integrate/types";
+import { emptyCounters, addCounters, type BatchRhs, type OdeSystem } from "../integrate/types";
 import { normInf, distInf } from "../linalg/vector";
 import { RunHistory } from "./run-history";
 import type { TraceRecorder } from "./trace";
@@ -37,6 +37,8 @@ export class RunMonitor {
     private readonly settings: RunSettings,
     private readonly known: EquilibriumSet,
     private readonly trace: TraceRecorder | null = null,
+    /** The system the Lyapunov probe integrates (the network, or its batched form). */
+    private readonly probeSystem: OdeSystem & Partial<BatchRhs> = network,
   ) {
     this.history = new RunHistory(network.n, settings.tMax);
     this.probeAt = settings.lyapunovStart ?? Infinity;
@@ -91,7 +93,7 @@ export class RunMonitor {
   /** Runs the Lyapunov probe from x (the run itself continues from x if it is not irregular). */
   private probe(x: Float64Array): boolean {
     this.probed = true;
-    const est = estimateLyapunov(this.network, x, {
+    const est = estimateLyapunov(this.probeSystem, x, {
       duration: this.settings.lyapunovDuration,
       interval: 1 / this.network.mu,
       rtol: this.settings.rtol,

@@ -2,7 +2,14 @@ import type { Network } from "../ensembles/ensemble";
 import { integrate } from "../integrate/integrate";
 import { integrateMany } from "../integrate/integrate-many";
 import { batchedSystem } from "../integrate/batched-system";
-import { addCounters, emptyCounters, type IntegrationCounters, type IntegrationResult } from "../integrate/types";
+import {
+  addCounters,
+  emptyCounters,
+  type BatchRhs,
+  type IntegrationCounters,
+  type IntegrationResult,
+  type OdeSystem,
+} from "../integrate/types";
 import { distInf } from "../linalg/vector";
 import { analyseEquilibrium } from "./equilibrium";
 import { EquilibriumSet } from "./equilibrium-set";
@@ -75,7 +82,8 @@ export function runStarts(network: Network, starts: Float64Array[], options: Run
       throw new RangeError(`starts[${i}] must be a Float64Array of length ${network.n}`);
     }
   });
-  const ctx = new RunContext(network, settings, options);
+  const system = batchedSystem(network);
+  const ctx = new RunContext(network, system, settings, options);
   const monitors = starts.map((s, i) => ctx.monitorFor(i, s));
   if (settings.method === "odex") {
     starts.forEach((s, i) => {
@@ -84,7 +92,7 @@ export function runStarts(network: Network, starts: Float64Array[], options: Run
     });
   } else {
     integrateMany(
-      batchedSystem(network),
+      system,
       starts.length,
       {
         start: (i) => starts[i],
@@ -105,7 +113,12 @@ class RunContext {
   private readonly traces = new Map<number, TraceRecorder>();
   private readonly maxShift: number;
 
-  constructor(private readonly network: Network, private readonly settings: RunSettings, private readonly options: RunStartsOptions) {
+  constructor(
+    private readonly network: Network,
+    private readonly system: OdeSystem & Partial<BatchRhs>,
+    private readonly settings: RunSettings,
+    private readonly options: RunStartsOptions,
+  ) {
     this.set = new EquilibriumSet(options.mergeTol);
     this.maxShift = (options.maxRefineShift ?? 0.1) * Math.max(1, network.stateScale);
   }
@@ -117,7 +130,7 @@ class RunContext {
       trace = new TraceRecorder(i, units, x0, this.options.traceMaxPoints ?? 100);
       this.traces.set(i, trace);
     }
-    return new RunMonitor(this.network, this.settings, this.set, trace);
+    return new RunMonitor(this.network, this.settings, this.set, trace, this.system);
   }
 
   finish(i: number, m: RunMonitor, r: IntegrationResult): void {

@@ -1,5 +1,6 @@
 import type { Network } from "../ensembles/ensemble";
 import type { BatchRhs, OdeSystem } from "./types";
+import { pairKernelModule } from "./pair-kernel-wasm";
 
 /** The shape of a rate network dx/dt = −μx + J φ(x) + I (ensembles/rate/rate-network.ts). */
 interface RateLike extends Network {
@@ -23,9 +24,10 @@ function isRateLike(net: Network): net is RateLike {
  * The network as a system for the batched Dormand–Prince driver: its own `rhsBatch` when it has
  * one; for a rate network a batched kernel that evaluates −μx + Jφ(x) + I for two states per
  * pass over J (each coupling row is read once for both, halving memory traffic; ideas of
- * science.md §4), with the same four-way accumulation order per state as the network's own
- * rhs, so every row equals rhs bit for bit (tested); otherwise the network unchanged (rows are
- * evaluated one by one).
+ * science.md §4) — in WebAssembly SIMD, one f64x2 lane per state (pair-kernel-wasm.ts), or in
+ * plain JavaScript where SIMD is unavailable — with the same four-way accumulation order per
+ * state as the network's own rhs, so every row equals rhs bit for bit (tested); otherwise the
+ * network unchanged (rows are evaluated one by one).
  * @param network the network
  * @returns an OdeSystem, possibly with rhsBatch
  */
@@ -39,9 +41,12 @@ export function batchedSystem(network: Network): OdeSystem & Partial<BatchRhs> {
 class RateBatch implements OdeSystem, BatchRhs {
   readonly n: number;
   private phi = new Float64Array(0);
+  private readonly wasm: WasmPair | null;
 
   constructor(private readonly net: RateLike) {
     this.n = net.n;
+    const mod = pairKernelModule();
+    this.wasm = mod ? new WasmPair(mod, net.couplings, net.n) : null;
   }
 
   rhs(x: Float64Array, out: Float64Array): void {
@@ -55,8 +60,27 @@ class RateBatch implements OdeSystem, BatchRhs {
     const view = phi.subarray(0, count * n);
     this.net.nonlinearity.apply(xs.subarray(0, count * n), view);
     let r = 0;
-    for (; r + 1 < count; r += 2) this.pair(xs, out, r * n, (r + 1) * n);
+    for (; r + 1 < count; r += 2) {
+      if (this.wasm) this.wasmPair(xs, out, r * n, (r + 1) * n);
+      else this.pair(xs, out, r * n, (r + 1) * n);
+    }
     if (r < count) this.single(xs, out, r * n);
+  }
+
+  private wasmPair(xs: Float64Array, out: Float64Array, a: number, b: number): void {
+    const { n } = this;
+    const { input, mu } = this.net;
+    const w = this.wasm!;
+    const p = this.phi;
+    for (let c = 0; c < n; c++) {
+      w.p[2 * c] = p[a + c];
+      w.p[2 * c + 1] = p[b + c];
+    }
+    w.run();
+    for (let i = 0; i < n; i++) {
+      out[a + i] = -mu * xs[a + i] + w.s[2 * i] + input[i];
+      out[b + i] = -mu * xs[b + i] + w.s[2 * i + 1] + input[i];
+    }
   }
 
   private pair(xs: Float64Array, out: Float64Array, a: number, b: number): void {
@@ -104,5 +128,31 @@ class RateBatch implements OdeSystem, BatchRhs {
       for (; c < n; c++) s0 += j[row + c] * p[a + c];
       out[a + i] = -mu * xs[a + i] + (s0 + s1 + (s2 + s3)) + input[i];
     }
+  }
+}
+
+/** One instance of the SIMD pair kernel with its own memory: J, then p (2n), then sums (2n). */
+class WasmPair {
+  readonly p: Float64Array;
+  readonly s: Float64Array;
+  private readonly kernel: (jOff: number, pOff: number, sOff: number, n: number) => void;
+  private readonly offsets: [number, number, number, number];
+
+  constructor(mod: WebAssembly.Module, j: Float64Array, n: number) {
+    const align = (v: number) => Math.ceil(v / 16) * 16;
+    const pOff = align(8 * n * n);
+    const sOff = align(pOff + 16 * n);
+    const bytes = sOff + 16 * n;
+    const memory = new WebAssembly.Memory({ initial: Math.ceil(bytes / 65536) });
+    const instance = new WebAssembly.Instance(mod, { e: { m: memory } });
+    this.kernel = instance.exports.k as WasmPair["kernel"];
+    new Float64Array(memory.buffer, 0, n * n).set(j);
+    this.p = new Float64Array(memory.buffer, pOff, 2 * n);
+    this.s = new Float64Array(memory.buffer, sOff, 2 * n);
+    this.offsets = [0, pOff, sOff, n];
+  }
+
+  run(): void {
+    this.kernel(...this.offsets);
   }
 }
