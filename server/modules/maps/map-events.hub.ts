@@ -21,20 +21,33 @@ export interface MapEventsHubDeps {
   logger: Logger;
   /** Milliseconds before reconnecting a lost LISTEN connection (default 1000, doubling to 30 s). */
   reconnectMs?: number;
+  /**
+   * Milliseconds between checks of every subscribed map (default 5000): a change that came
+   * without a notification (a write that does not notify, a notification lost while
+   * reconnecting) still reaches subscribers as `progress` / `status`.
+   */
+  resyncMs?: number;
 }
 
 interface Topic {
   listeners: Set<MapEventListener>;
   lastStatus: string | null;
+  /** Status and counters last sent as `progress`, to skip unchanged resyncs. */
+  lastProgress: string | null;
   /** Notifications of one map are handled in order. */
   chain: Promise<void>;
+}
+
+function progressKey(p: MapProgress): string {
+  return `${p.status}:${p.cellsDone}:${p.failure ?? ""}`;
 }
 
 /**
  * One LISTEN map_events connection per server process, fanned out to the subscribers of each
  * map. The connection opens with the first subscriber and reconnects (with back-off) while
  * anybody listens; after a reconnect every map gets a fresh `progress`, since notifications
- * sent while disconnected are lost. Each notification is turned into events once per map,
+ * sent while disconnected are lost, and every few seconds each subscribed map is checked for a
+ * change no notification announced. Each notification is turned into events once per map,
  * however many subscribers it has.
  */
 export class MapEventsHub {
@@ -43,6 +56,7 @@ export class MapEventsHub {
   private connecting: Promise<void> | null = null;
   private retryMs: number;
   private closed = false;
+  private resync: NodeJS.Timeout | null = null;
 
   constructor(private readonly deps: MapEventsHubDeps) {
     this.retryMs = deps.reconnectMs ?? 1000;
@@ -53,10 +67,11 @@ export class MapEventsHub {
     if (this.closed) throw new Error("map events hub is closed");
     let topic = this.topics.get(mapId);
     if (!topic) {
-      topic = { listeners: new Set(), lastStatus: null, chain: Promise.resolve() };
+      topic = { listeners: new Set(), lastStatus: null, lastProgress: null, chain: Promise.resolve() };
       this.topics.set(mapId, topic);
     }
     topic.listeners.add(listener);
+    this.resync ??= setInterval(() => this.resyncAll(), this.deps.resyncMs ?? 5000).unref();
     await this.ensureListening();
     return () => {
       topic.listeners.delete(listener);
@@ -69,7 +84,10 @@ export class MapEventsHub {
     const progress = await readMapProgress(this.deps.db, mapId);
     if (!progress) return [];
     const topic = this.topics.get(mapId);
-    if (topic) topic.lastStatus = progress.status;
+    if (topic) {
+      topic.lastStatus = progress.status;
+      topic.lastProgress = progressKey(progress);
+    }
     return [{ type: "progress", data: progress }, { type: "status", data: { status: progress.status, failure: progress.failure } }];
   }
 
@@ -82,6 +100,7 @@ export class MapEventsHub {
 
   async close(): Promise<void> {
     this.closed = true;
+    if (this.resync) clearInterval(this.resync);
     this.topics.clear();
     const client = this.client;
     this.client = null;
@@ -177,11 +196,19 @@ export class MapEventsHub {
     for (const summary of await listCellSummaries(this.deps.db, mapId, filter)) this.emit(mapId, { type: "cell", data: summary });
   }
 
-  private async sendProgress(mapId: string): Promise<void> {
+  private resyncAll(): void {
+    for (const mapId of this.topics.keys()) this.enqueue(mapId, () => this.sendProgress(mapId, true));
+  }
+
+  /** Sends `progress` (when `onlyChanged`, only if status or counters moved) and `status` on a change. */
+  private async sendProgress(mapId: string, onlyChanged = false): Promise<void> {
     const topic = this.topics.get(mapId);
     if (!topic) return;
     const progress = await readMapProgress(this.deps.db, mapId);
     if (!progress) return;
+    const key = progressKey(progress);
+    if (onlyChanged && key === topic.lastProgress) return;
+    topic.lastProgress = key;
     this.emit(mapId, { type: "progress", data: progress });
     if (progress.status !== topic.lastStatus) {
       topic.lastStatus = progress.status;

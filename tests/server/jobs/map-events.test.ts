@@ -85,6 +85,22 @@ describe("GET /api/maps/:id/events", () => {
     viaLink.close();
   });
 
+  it("tells subscribers when the map is cancelled", async () => {
+    const owner = await signedInPerson(app, "owner");
+    // Cells of about a second each (N = 30, 8 networks × 48 starts): the cancel comes mid-map.
+    const slow = { ...body(33), settings: { N: 30, g: 1, nonlinearity: "tanh", input: 0 }, budget: { networks: 8, starts: 48, tMax: 100, rtol: 1e-6, atol: 1e-9 } };
+    const created = await owner.client.post(apiPaths.maps.list, slow);
+    expect(created.status).toBe(201);
+    const id = created.body.id as string;
+    const stream = await openSse(`${app.baseUrl}${apiPaths.maps.events(id)}`, cookieOf(owner.client));
+    await stream.until((ev) => ev.some((e) => e.event === "status"));
+    expect((await owner.client.post(apiPaths.maps.cancel(id))).status).toBe(200);
+    await stream.until((ev) => ev.some((e) => e.event === "status" && e.data.status === "cancelled"), 15_000);
+    const last = stream.events.filter((e) => e.event === "progress").at(-1)!;
+    expect(last.data.status).toBe("cancelled");
+    stream.close();
+  });
+
   it("answers 401 signed out without a token, 404 to another account, 422 on a bad id", async () => {
     const owner = await signedInPerson(app, "owner");
     const other = await signedInPerson(app, "other");
