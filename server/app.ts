@@ -8,6 +8,8 @@ import { apiNotFound, errorHandler } from "./lib/error-handler";
 import { logger as defaultLogger, type Logger } from "./lib/logger";
 import { originCheck } from "./lib/origin-check";
 import type { Mailer } from "./mail/mailer";
+import { createAccountRouter } from "./modules/account/account.router";
+import { createAccountService } from "./modules/account/account.service";
 import { createAdminRouter } from "./modules/admin/admin.router";
 import { createAdminService } from "./modules/admin/admin.service";
 import { createAuthRouter } from "./modules/auth/auth.router";
@@ -24,7 +26,12 @@ import { createMapReadsService } from "./modules/maps/map-reads.service";
 import { bossMapJobs, noMapJobs } from "./modules/maps/maps.jobs";
 import { createMapsRouter } from "./modules/maps/maps.router";
 import { createMapsService } from "./modules/maps/maps.service";
+import { createProbePool } from "./modules/probes/probe.pool";
+import { createProbesRouter } from "./modules/probes/probes.router";
+import { createProbesService } from "./modules/probes/probes.service";
 import type { PgBoss } from "./queue/boss";
+import { createReviewRouter } from "./modules/review/review.router";
+import { createReviewService } from "./modules/review/review.service";
 import { createTheoryRouter } from "./modules/theory/theory.router";
 
 export interface AppConfig {
@@ -74,6 +81,10 @@ export function createApp(deps: AppDeps): AppHandle {
   const maps = createMapsService({ db, groups, appUrl: config.appUrl, jobs: deps.boss ? bossMapJobs(deps.boss) : noMapJobs });
   const mapReads = createMapReadsService({ db, maps });
   const mapEvents = createMapEventsHub({ db, pool, logger });
+  const probePool = createProbePool({ threads: 1 });
+  const probes = createProbesService({ db, groups, pool: probePool, boss: deps.boss });
+  const review = createReviewService({ db, maps });
+  const account = createAccountService({ db });
 
   const PgStore = connectPgSimple(session);
   const store = new PgStore({
@@ -118,7 +129,10 @@ export function createApp(deps: AppDeps): AppHandle {
   app.use(createAdminRouter(admin));
   app.use(createTheoryRouter());
   app.use(createMapsRouter(maps, mapReads));
+  app.use(createReviewRouter(review));
+  app.use(createAccountRouter(account));
   app.use(createMapEventsRouter({ hub: mapEvents, canRead: (actor, id, token) => maps.getReadable(actor, id, token) }));
+  app.use(createProbesRouter(probes));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir) {
@@ -133,6 +147,7 @@ export function createApp(deps: AppDeps): AppHandle {
     close: async () => {
       clearInterval(prune);
       await mapEvents.close();
+      await probePool.close();
       await store.close();
     },
   };

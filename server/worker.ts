@@ -3,7 +3,9 @@ import { z } from "zod";
 import { openDatabase } from "./db/client";
 import { createComputePool } from "./jobs/compute-pool";
 import { startJobWorkers } from "./jobs/job-workers";
+import { mapFinishedMailHook } from "./jobs/map-finished.job";
 import { logger } from "./lib/logger";
+import { createMailer } from "./mail/mailer";
 import { createBoss } from "./queue/boss";
 
 // Worker process entry (`npm run worker`): takes map jobs from pg-boss and computes cells in a
@@ -19,6 +21,12 @@ const envSchema = z.object({
   WORKER_STOP_SECONDS: z.coerce.number().min(1).max(3600).default(30),
   /** Shortens pg-boss maintenance (expiring jobs of dead workers) — tests use 1. */
   QUEUE_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),
+  /** The "map finished" e-mail: SMTP relay and the public origin its link points at (as server/env.ts). */
+  SMTP_HOST: z.string().min(1).default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  MAIL_FROM: z.string().min(3).default("Equilibrist <no-reply@equilibrist.local>"),
+  APP_URL: z.url().optional(),
+  PORT: z.coerce.number().int().min(1).max(65535).default(4310),
 });
 
 const parsed = envSchema.safeParse(Object.fromEntries(Object.entries(process.env).filter(([, v]) => v)));
@@ -34,8 +42,11 @@ const workerName = env.WORKER_NAME ?? `${hostname()}:${process.pid}`;
 const database = openDatabase(env.DATABASE_URL, { max: threads + 2 });
 const boss = await createBoss(env.DATABASE_URL, { maintenanceIntervalSeconds: env.QUEUE_MAINTENANCE_SECONDS, applicationName: `equilibrist-worker ${workerName}` });
 const compute = createComputePool({ threads });
+const mailer = createMailer({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
+const appUrl = env.APP_URL ?? `http://127.0.0.1:${env.PORT}`;
 const workers = await startJobWorkers({
   db: database.db, boss, compute, workerName, logger, pollingIntervalSeconds: env.WORKER_POLL_SECONDS,
+  onMapFinished: mapFinishedMailHook({ db: database.db, mailer, appUrl, logger }),
 });
 logger.info("worker ready", { worker: workerName, threads });
 process.stdout.write(`[equilibrist] worker ${workerName} ready with ${threads} thread${threads === 1 ? "" : "s"}\n`);
@@ -51,6 +62,7 @@ async function shutdown(signal: string): Promise<void> {
   // Waits for running jobs up to the timeout, then fails the rest so pg-boss retries them.
   await boss.stop({ graceful: true, wait: true, timeout: env.WORKER_STOP_SECONDS * 1000 });
   await compute.close();
+  mailer.close();
   await database.close();
   process.exit(0);
 }

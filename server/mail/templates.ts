@@ -41,3 +41,41 @@ export function groupInviteMail(
     html: page(lines, { url, label: "Open the invitation" }),
   };
 }
+
+/** Facts of a finished map for its owner's e-mail. */
+export interface FinishedMapFacts {
+  title: string;
+  status: string;
+  cellsTotal: number;
+  cellsComputed: number;
+  cellsFromCache: number;
+  /** Seconds from the first finished cell to the last (null when unknown). */
+  seconds: number | null;
+  failure: string | null;
+}
+
+function duration(seconds: number | null): string {
+  if (seconds === null) return "";
+  if (seconds < 90) return ` in ${Math.max(1, Math.round(seconds))} s`;
+  if (seconds < 5400) return ` in ${Math.round(seconds / 60)} min`;
+  return ` in ${(seconds / 3600).toFixed(1)} h`;
+}
+
+/** The "map finished" e-mail (sent only to owners who opted in on their account page). */
+export function mapFinishedMail(to: { email: string; name: string }, map: FinishedMapFacts, url: string): MailMessage {
+  const done = map.status === "done";
+  const counts = `${map.cellsTotal} cells (${map.cellsComputed} computed, ${map.cellsFromCache} from the cache)`;
+  const lines = [
+    `Hello ${to.name},`,
+    done
+      ? `Your map "${map.title}" has finished filling: ${counts}${duration(map.seconds)}.`
+      : `Your map "${map.title}" stopped (${map.status})${map.failure ? `: ${map.failure}` : ""}. Finished cells are kept.`,
+    "Open the link below to see it. You get this e-mail because \"E-mail me when a map finishes\" is on in your account settings.",
+  ];
+  return {
+    to: to.email,
+    subject: done ? `Map finished: ${map.title}` : `Map ${map.status}: ${map.title}`,
+    text: `${lines.join("\n\n")}\n\n${url}\n`,
+    html: page(lines, { url, label: "Open the map" }),
+  };
+}

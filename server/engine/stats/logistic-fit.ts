@@ -14,6 +14,8 @@ export interface LogisticFitOptions {
   maxIterations?: number;
   /** Converged when every coefficient moves less than this (in standardised x). Default 1e-10. */
   tolerance?: number;
+  /** Starting (a, b), e.g. the fit to the full data when refitting bootstrap resamples. Default (0, 0). */
+  start?: readonly [number, number];
 }
 
 export interface LogisticFit {
@@ -134,14 +136,16 @@ function newtonStep(s: Step): [number, number] {
   return big > 5 ? [(d0 * 5) / big, (d1 * 5) / big] : [d0, d1];
 }
 
-function checkOptions(o: LogisticFitOptions): Required<LogisticFitOptions> {
+function checkOptions(o: LogisticFitOptions): Required<Omit<LogisticFitOptions, "start">> & { start: readonly [number, number] } {
   const method = o.method ?? "ml";
   if (method !== "ml" && method !== "firth") throw new RangeError(`method must be "ml" or "firth", got ${String(method)}`);
   const maxIterations = o.maxIterations ?? 100;
   if (!Number.isSafeInteger(maxIterations) || maxIterations < 1) throw new RangeError(`maxIterations must be a positive integer, got ${maxIterations}`);
   const tolerance = o.tolerance ?? 1e-10;
   if (!(tolerance > 0)) throw new RangeError(`tolerance must be positive, got ${tolerance}`);
-  return { method, maxIterations, tolerance };
+  const start = o.start ?? [0, 0];
+  if (!Number.isFinite(start[0]) || !Number.isFinite(start[1])) throw new RangeError(`start must hold two finite numbers, got ${String(start)}`);
+  return { method, maxIterations, tolerance, start };
 }
 
 /**
@@ -153,7 +157,7 @@ function checkOptions(o: LogisticFitOptions): Required<LogisticFitOptions> {
  * @param x covariate of each group (e.g. ln μ of a cell)
  * @param successes successes in each group (e.g. networks with exactly one stable state)
  * @param trials trials in each group; groups with 0 trials are ignored
- * @param options method ("ml"), maxIterations (100), tolerance (1e-10)
+ * @param options method ("ml"), maxIterations (100), tolerance (1e-10), start ([0, 0])
  * @returns coefficients, covariance (inverse Fisher information), log-likelihood
  * @throws RangeError on malformed data, x with a single value, separated data with method
  *   "ml" (use "firth"), or no convergence
@@ -165,8 +169,13 @@ export function fitLogistic(x: readonly number[], successes: readonly number[], 
   if (!firth && isSeparated(x, successes, trials)) {
     throw new RangeError("the outcomes are separated by x, so the maximum-likelihood fit does not exist; use method \"firth\"");
   }
-  let alpha = 0, beta = 0;
-  let s = evaluate(g, alpha, beta, firth) as Step;
+  // (a, b) in x → (α, β) in u = (x − c)/s: α = a + b·c, β = b·s.
+  let alpha = o.start[0] + o.start[1] * g.centre, beta = o.start[1] * g.scale;
+  let s = evaluate(g, alpha, beta, firth);
+  if (!s) {
+    alpha = 0; beta = 0;
+    s = evaluate(g, 0, 0, firth) as Step;
+  }
   for (let it = 1; it <= o.maxIterations; it++) {
     const [d0, d1] = newtonStep(s);
     let t = 1;
