@@ -22,6 +22,12 @@ export const probeLimits = Object.freeze({
   maxStarts: 512,
   /** Largest number of comparison networks. */
   maxCompareNetworks: 16,
+  /**
+   * Largest search work N² × starts × (1 + comparison networks), by site role: about 40 minutes
+   * on two threads at the member limit (N = 2000, 64 starts, 9 networks measured at ~2.3e9
+   * multiply-adds per minute per thread; see the README's Probe API section).
+   */
+  maxSearchWork: { member: 2.6e9, admin: 2.6e10 } as const,
 });
 
 export const probeFormatSchema = z.enum(["csv", "npy", "mtx"]);
@@ -135,6 +141,8 @@ export type ProbeComparison = z.infer<typeof probeComparisonSchema>;
 
 /** Settings and live progress of the latest search. */
 export const probeSearchStateSchema = z.object({
+  /** Names this search; a job of a superseded search does nothing. */
+  id: idSchema,
   settings: probeSearchSchema,
   requestedAt: timestampSchema,
   startedAt: timestampSchema.nullable(),
