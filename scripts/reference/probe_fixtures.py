@@ -8,8 +8,8 @@ Re-run from the repository root:  python3 scripts/reference/probe_fixtures.py
   a header row, not square, empty) written as literal text below;
 - JSON of the hand-written Matrix Market files (*.mtx, written by hand following NISTIR 5935),
   read here with scipy.io.mmread as an independent reader;
-- tests/reference/probe-stats.json: ĝ, τ̂, mean and diagonal statistics of a sampled 40 × 40
-  matrix (probe-40.npy, also the browser test's upload) computed with numpy.
+- tests/reference/probe-stats.json: ĝ, τ̂, mean and diagonal statistics and the eigenvalues of a
+  sampled 40 × 40 matrix (probe-40.npy, also the browser test's upload) computed with numpy.
 Every JSON carries a "source" field naming the library and version that wrote it.
 """
 import json
@@ -107,6 +107,8 @@ def stats_reference(rng: np.random.Generator) -> None:
         "diagonalSd": float(d.std(ddof=1)),
         "rowSumMean": float(J.sum(axis=1).mean()),
         "frobenius": float(np.linalg.norm(J)),
+        "eigenvaluesSource": f"{NP} numpy.linalg.eigvals, sorted by (real part, imaginary part)",
+        "eigenvalues": [[float(w.real), float(w.imag)] for w in sorted(np.linalg.eigvals(J), key=lambda w: (w.real, w.imag))],
     }
     (REF / "probe-stats.json").write_text(json.dumps(record, indent=1) + "\n")
 
