@@ -2,10 +2,12 @@ import type PgBoss from "pg-boss";
 import type { Db } from "../db/client";
 import type { Logger } from "../lib/logger";
 import { createCellsService } from "../modules/cells/cells.service";
-import { FILL_CELL_EXHAUSTED_QUEUE, FILL_CELL_QUEUE, MAP_FINISHED_QUEUE, THEORY_ROW_QUEUE, type QueueName } from "../queue/queues";
+import { createProbePool, type ProbePool } from "../modules/probes/probe.pool";
+import { FILL_CELL_EXHAUSTED_QUEUE, FILL_CELL_QUEUE, MAP_FINISHED_QUEUE, PROBE_SEARCH_QUEUE, THEORY_ROW_QUEUE, type QueueName } from "../queue/queues";
 import type { ComputePool } from "./compute-pool";
 import { fillCell, giveUpCell } from "./fill-cell.job";
 import { mapFinished, type MapFinishedHook } from "./map-finished.job";
+import { probeSearch } from "./probe-search.job";
 import { computeTheoryRow } from "./theory-row.job";
 
 export interface JobWorkersOptions {
@@ -20,6 +22,8 @@ export interface JobWorkersOptions {
   /** Seconds between polls of an idle queue (default 2; pg-boss allows ≥ 0.5). */
   pollingIntervalSeconds?: number;
   onMapFinished?: MapFinishedHook;
+  /** Threads of probe searches (default: a pool as wide as `compute`; idle threads exit). */
+  probePool?: ProbePool;
 }
 
 export interface JobWorkers {
@@ -42,11 +46,13 @@ export async function startJobWorkers(o: JobWorkersOptions): Promise<JobWorkers>
   const concurrency = o.concurrency ?? o.compute.threads;
   if (!Number.isSafeInteger(concurrency) || concurrency < 1) throw new RangeError(`concurrency must be a positive integer, got ${concurrency}`);
   const fill = { db: o.db, cells, compute: o.compute, workerName: o.workerName, logger: o.logger };
+  const probePool = o.probePool ?? createProbePool({ threads: o.compute.threads });
   const handlers: [QueueName, number, Handle][] = [
     [FILL_CELL_QUEUE, concurrency, (job) => fillCell(fill, job.data)],
     [THEORY_ROW_QUEUE, concurrency, (job) => computeTheoryRow(fill, job.data)],
     [FILL_CELL_EXHAUSTED_QUEUE, 1, (job) => giveUpCell(fill, job)],
     [MAP_FINISHED_QUEUE, 1, (job) => mapFinished({ db: o.db, logger: o.logger, onFinished: o.onMapFinished }, job.data)],
+    [PROBE_SEARCH_QUEUE, 1, (job) => probeSearch({ db: o.db, pool: probePool, logger: o.logger }, job)],
   ];
   const ids: string[] = [];
   const options = { batchSize: 1, includeMetadata: true as const, pollingIntervalSeconds: o.pollingIntervalSeconds ?? 2 };

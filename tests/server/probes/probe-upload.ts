@@ -23,7 +23,7 @@ export function fixture(name: string, field = "matrix"): UploadPart {
 export async function uploadProbe(baseUrl: string, client: TestClient | null, parts: UploadPart[], fields: Record<string, string> = { mu: "1" }): Promise<TestResponse> {
   const form = new FormData();
   for (const [k, v] of Object.entries(fields)) form.set(k, v);
-  for (const p of parts) form.append(p.field, new Blob([p.bytes]), p.name);
+  for (const p of parts) form.append(p.field, new Blob([new Uint8Array(p.bytes)]), p.name);
   const headers: Record<string, string> = {};
   if (client && client.jar.size > 0) headers.cookie = [...client.jar].map(([k, v]) => `${k}=${v}`).join("; ");
   const res = await fetch(`${baseUrl}/api/probes`, { method: "POST", body: form, headers });
