@@ -1,8 +1,6 @@
-import { createComputePool, type ComputePool } from "../../../server/jobs/compute-pool";
-import { startJobWorkers, type JobWorkers } from "../../../server/jobs/job-workers";
-import { logger } from "../../../server/lib/logger";
 import type { TestClient } from "../../helpers/http-client";
 import { startTestApp, type TestApp } from "../../helpers/test-app";
+import { spawnWorker, type WorkerProcess } from "../../server/worker/worker-process";
 
 /** A small rate-network map that fills in a few seconds on one thread (4 cells, N = 4). */
 export const TINY_RATE_MAP = {
@@ -16,21 +14,23 @@ export const TINY_RATE_MAP = {
   visibility: "private",
 } as const;
 
-/** The real app with pg-boss and, when asked, an in-process map worker on one engine thread. */
+/**
+ * The real app with pg-boss and, when asked, a worker process (`server/worker.ts`, one engine
+ * thread) on the same database. A separate process, because the engine's thread pool cannot
+ * locate its worker file from inside the jsdom test environment.
+ */
 export async function startMapsApp(options: { worker: boolean }) {
   const app: TestApp = await startTestApp({ queue: true });
-  let compute: ComputePool | undefined;
-  let workers: JobWorkers | undefined;
-  if (options.worker) {
-    compute = createComputePool({ threads: 1 });
-    workers = await startJobWorkers({ db: app.database.db, boss: app.boss!, compute, workerName: "client-test", logger, pollingIntervalSeconds: 0.5 });
-  }
+  let worker: WorkerProcess | undefined;
+  if (options.worker) worker = await spawnWorker(app.database.pool.options.connectionString!);
   return {
     app,
     async stop() {
-      await workers?.stop();
+      if (worker) {
+        worker.child.kill("SIGTERM");
+        await worker.exited;
+      }
       await app.stop();
-      await compute?.close();
     },
   };
 }

@@ -2,7 +2,6 @@ import { HeatmapRect } from "@visx/heatmap";
 import { memo, useMemo } from "react";
 import type { CellPaint } from "../../lib/cell-paints";
 
-
 interface HeatCellsProps {
   muSteps: number;
   tauSteps: number;
@@ -15,29 +14,10 @@ interface HeatCellsProps {
 
 type Column = { i: number; bins: number[] };
 
-const CellRect = memo(function CellRect(p: { k: number; x: number; y: number; w: number; h: number; paint: CellPaint; tabbable: boolean | null }) {
-  const interactive = p.tabbable !== null;
-  return (
-    <rect
-      data-k={p.k}
-      x={p.x}
-      y={p.y}
-      width={p.w}
-      height={p.h}
-      fill={p.paint.fill}
-      fillOpacity={p.paint.dim ? 0.22 : 1}
-      role={interactive ? "button" : undefined}
-      tabIndex={interactive ? (p.tabbable ? 0 : -1) : undefined}
-      aria-label={interactive ? p.paint.label : undefined}
-      style={interactive ? { cursor: "pointer", outline: "none" } : undefined}
-    />
-  );
-});
-
 /**
  * One rect per cell, laid out by visx's HeatmapRect (column i along μ, row j along τ, τ growing
- * upwards). Each rect is memoised on its paint, so a layer change repaints in one pass and
- * moving the keyboard focus touches two cells only.
+ * upwards). Plain host elements with no handlers or inline styles of their own (the parent
+ * listens, and styles them through one class), so 4096 cells stay cheap to draw and re-colour.
  */
 export const HeatCells = memo(function HeatCells({ muSteps, tauSteps, width, height, paints, active }: HeatCellsProps) {
   const columns = useMemo<Column[]>(
@@ -47,6 +27,7 @@ export const HeatCells = memo(function HeatCells({ muSteps, tauSteps, width, hei
   const bw = width / muSteps;
   const bh = height / tauSteps;
   const gap = Math.min(bw, bh) > 8 ? 1 : 0;
+  const interactive = active >= 0;
   return (
     <HeatmapRect<Column, number>
       data={columns}
@@ -62,16 +43,20 @@ export const HeatCells = memo(function HeatCells({ muSteps, tauSteps, width, hei
         grid.flatMap((col) =>
           col.map((cell) => {
             const k = cell.column + cell.row * muSteps;
+            const paint = paints[k];
             return (
-              <CellRect
+              <rect
                 key={k}
-                k={k}
+                data-k={k}
                 x={cell.x}
                 y={cell.y}
-                w={Math.max(0.5, cell.width)}
-                h={Math.max(0.5, cell.height)}
-                paint={paints[k]}
-                tabbable={active < 0 ? null : k === active}
+                width={Math.max(0.5, cell.width)}
+                height={Math.max(0.5, cell.height)}
+                fill={paint.fill}
+                fillOpacity={paint.dim ? 0.22 : undefined}
+                role={interactive ? "button" : undefined}
+                tabIndex={interactive ? (k === active ? 0 : -1) : undefined}
+                aria-label={interactive ? paint.label : undefined}
               />
             );
           }),

@@ -102,6 +102,8 @@ export const MapFigure = memo(function MapFigure({ map, grid, layerId, criteria,
         </clipPath>
         <g
           ref={cellsRef}
+          className={interactive ? "cursor-pointer [&_rect]:outline-none" : undefined}
+          shapeRendering="crispEdges"
           role={interactive ? "group" : undefined}
           aria-label={interactive ? "Cells: arrow keys move, Enter opens the cell" : undefined}
           onKeyDown={interactive ? focus.onKeyDown : undefined}
