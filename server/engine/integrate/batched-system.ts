@@ -22,7 +22,7 @@ function isRateLike(net: Network): net is RateLike {
 
 /**
  * The network as a system for the batched Dormand–Prince driver: its own `rhsBatch` when it has
- * one; for a rate network a batched kernel that evaluates −μx + Jφ(x) + I for two states per
+ * one; for a rate network a batched kernel that evaluates −μx + Jφ(x) + I for two or four states per
  * pass over J (each coupling row is read once for both, halving memory traffic; ideas of
  * science.md §4) — in WebAssembly SIMD, one f64x2 lane per state (pair-kernel-wasm.ts), or in
  * plain JavaScript where SIMD is unavailable — with the same four-way accumulation order per
@@ -60,26 +60,26 @@ class RateBatch implements OdeSystem, BatchRhs {
     const view = phi.subarray(0, count * n);
     this.net.nonlinearity.apply(xs.subarray(0, count * n), view);
     let r = 0;
+    if (this.wasm) for (; r + 3 < count; r += 4) this.wasmRows(xs, out, r, 4);
     for (; r + 1 < count; r += 2) {
-      if (this.wasm) this.wasmPair(xs, out, r * n, (r + 1) * n);
+      if (this.wasm) this.wasmRows(xs, out, r, 2);
       else this.pair(xs, out, r * n, (r + 1) * n);
     }
     if (r < count) this.single(xs, out, r * n);
   }
 
-  private wasmPair(xs: Float64Array, out: Float64Array, a: number, b: number): void {
+  /** Rows first … first+width−1 (width 2 or 4) through the SIMD kernel. */
+  private wasmRows(xs: Float64Array, out: Float64Array, first: number, width: 2 | 4): void {
     const { n } = this;
     const { input, mu } = this.net;
     const w = this.wasm!;
     const p = this.phi;
-    for (let c = 0; c < n; c++) {
-      w.p[2 * c] = p[a + c];
-      w.p[2 * c + 1] = p[b + c];
-    }
-    w.run();
-    for (let i = 0; i < n; i++) {
-      out[a + i] = -mu * xs[a + i] + w.s[2 * i] + input[i];
-      out[b + i] = -mu * xs[b + i] + w.s[2 * i + 1] + input[i];
+    const base = first * n;
+    for (let c = 0; c < n; c++) for (let q = 0; q < width; q++) w.p[width * c + q] = p[base + q * n + c];
+    w.run(width);
+    for (let q = 0; q < width; q++) {
+      const a = base + q * n;
+      for (let i = 0; i < n; i++) out[a + i] = -mu * xs[a + i] + w.s[width * i + q] + input[i];
     }
   }
 
@@ -131,28 +131,31 @@ class RateBatch implements OdeSystem, BatchRhs {
   }
 }
 
-/** One instance of the SIMD pair kernel with its own memory: J, then p (2n), then sums (2n). */
+/** One instance of the SIMD kernels with its own memory: J, then p (4n), then sums (4n). */
 class WasmPair {
   readonly p: Float64Array;
   readonly s: Float64Array;
-  private readonly kernel: (jOff: number, pOff: number, sOff: number, n: number) => void;
+  private readonly k2: (jOff: number, pOff: number, sOff: number, n: number) => void;
+  private readonly k4: (jOff: number, pOff: number, sOff: number, n: number) => void;
   private readonly offsets: [number, number, number, number];
 
   constructor(mod: WebAssembly.Module, j: Float64Array, n: number) {
     const align = (v: number) => Math.ceil(v / 16) * 16;
     const pOff = align(8 * n * n);
-    const sOff = align(pOff + 16 * n);
-    const bytes = sOff + 16 * n;
+    const sOff = align(pOff + 32 * n);
+    const bytes = sOff + 32 * n;
     const memory = new WebAssembly.Memory({ initial: Math.ceil(bytes / 65536) });
     const instance = new WebAssembly.Instance(mod, { e: { m: memory } });
-    this.kernel = instance.exports.k as WasmPair["kernel"];
+    this.k2 = instance.exports.k2 as WasmPair["k2"];
+    this.k4 = instance.exports.k4 as WasmPair["k4"];
     new Float64Array(memory.buffer, 0, n * n).set(j);
-    this.p = new Float64Array(memory.buffer, pOff, 2 * n);
-    this.s = new Float64Array(memory.buffer, sOff, 2 * n);
+    this.p = new Float64Array(memory.buffer, pOff, 4 * n);
+    this.s = new Float64Array(memory.buffer, sOff, 4 * n);
     this.offsets = [0, pOff, sOff, n];
   }
 
-  run(): void {
-    this.kernel(...this.offsets);
+  run(width: 2 | 4): void {
+    if (width === 4) this.k4(...this.offsets);
+    else this.k2(...this.offsets);
   }
 }

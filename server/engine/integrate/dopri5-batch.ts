@@ -50,7 +50,6 @@ export class Dopri5Batch {
   private readonly facOld: Float64Array;
   private readonly lastRejected: Uint8Array;
   private readonly views = new Map<Float64Array, Float64Array[]>();
-  private readonly sources: Float64Array[][];
 
   constructor(
     private readonly system: OdeSystem & Partial<BatchRhs>,
@@ -81,7 +80,6 @@ export class Dopri5Batch {
     this.acceptedNow = new Uint8Array(capacity);
     this.lastRejected = new Uint8Array(capacity);
     for (const b of [this.x, this.f, this.ytmp, this.ynew, ...this.k]) this.views.set(b, this.makeViews(b));
-    this.sources = A.map((a) => [this.f, ...this.k.slice(0, a.length - 1)]);
   }
 
   private makeViews(b: Float64Array): Float64Array[] {
@@ -139,7 +137,7 @@ export class Dopri5Batch {
     this.prepareSteps(m);
     for (let s = 0; s < STAGE_COUNT - 1; s++) {
       const target = s === STAGE_COUNT - 2 ? this.ynew : this.ytmp;
-      this.combine(m, A[s], this.sources[s], target);
+      this.combine(m, A[s], target);
       this.evaluate(target, this.k[s], m);
     }
     for (let r = 0; r < m; r++) {
@@ -164,20 +162,35 @@ export class Dopri5Batch {
     }
   }
 
-  /** target_r = x_r + h_r Σ_j a_j K_j,r over the stages so far (stage 1 is f). */
-  private combine(m: number, a: readonly number[], sources: Float64Array[], target: Float64Array): void {
+  /**
+   * target_r = x_r + h_r Σ_j a_j K_j,r over the stages so far (stage 1 is f), summed left to
+   * right; one specialised loop per stage count (no inner loop over stages).
+   */
+  private combine(m: number, a: readonly number[], target: Float64Array): void {
     const n = this.n;
+    const { x, f } = this;
+    const [k0, k1, k2, k3, k4] = this.k;
+    const [a0, a1 = 0, a2 = 0, a3 = 0, a4 = 0, a5 = 0] = a;
+    const stages = a.length;
     for (let r = 0; r < m; r++) {
       const base = r * n;
+      const end = base + n;
       if (this.status[r] !== ROW.running) {
-        target.set(this.x.subarray(base, base + n), base); // keep idle rows finite
+        target.set(x.subarray(base, end), base); // keep idle rows finite
         continue;
       }
       const h = this.h[r];
-      for (let i = base; i < base + n; i++) {
-        let s = 0;
-        for (let j = 0; j < a.length; j++) s += a[j] * sources[j][i];
-        target[i] = this.x[i] + h * s;
+      if (stages === 1) for (let i = base; i < end; i++) target[i] = x[i] + h * (a0 * f[i]);
+      else if (stages === 2) for (let i = base; i < end; i++) target[i] = x[i] + h * (a0 * f[i] + a1 * k0[i]);
+      else if (stages === 3) for (let i = base; i < end; i++) target[i] = x[i] + h * (a0 * f[i] + a1 * k0[i] + a2 * k1[i]);
+      else if (stages === 4) {
+        for (let i = base; i < end; i++) target[i] = x[i] + h * (a0 * f[i] + a1 * k0[i] + a2 * k1[i] + a3 * k2[i]);
+      } else if (stages === 5) {
+        for (let i = base; i < end; i++) target[i] = x[i] + h * (a0 * f[i] + a1 * k0[i] + a2 * k1[i] + a3 * k2[i] + a4 * k3[i]);
+      } else {
+        for (let i = base; i < end; i++) {
+          target[i] = x[i] + h * (a0 * f[i] + a1 * k0[i] + a2 * k1[i] + a3 * k2[i] + a4 * k3[i] + a5 * k4[i]);
+        }
       }
     }
   }

@@ -1,7 +1,8 @@
 /**
- * A WebAssembly SIMD kernel for the rate network's batched right-hand side: for two states a, b
- * stored interleaved (p[2c] = φ(x_a)_c, p[2c+1] = φ(x_b)_c) it writes, for every row i of J,
- * the pair (Σ_c J_ic p_a,c, Σ_c J_ic p_b,c) with one f64x2 lane per state. The sums use four
+ * WebAssembly SIMD kernels for the rate network's batched right-hand side: for two (or four)
+ * states stored interleaved (p[2c + s] = φ(x_s)_c) they write, for every row i of J, the sums
+ * Σ_c J_ic p_s,c of each state s, one f64x2 lane per state (each coupling is loaded once for all
+ * the states). The sums use four
  * accumulators over c ≡ 0, 1, 2, 3 (mod 4), the tail added to the first, combined as
  * (s0 + s1) + (s2 + s3): the same IEEE operations in the same order as the scalar kernel of
  * ensembles/rate/rate-network.ts, so results agree bit for bit (f64x2.mul/add are exactly the
@@ -30,9 +31,10 @@ function section(id: number, body: number[]): number[] {
 
 const str = (s: string) => [...uleb(s.length), ...Array.from(s, (ch) => ch.charCodeAt(0))];
 
-// Locals: 0 jOff, 1 pOff, 2 sOff, 3 n (params); 4 i, 5 c, 6 row, 7 n4, 8 ja, 9 pa (i32); 10–13 acc (v128).
-const [J_OFF, P_OFF, S_OFF, N, I, C, ROW, N4, JA, PA] = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9];
-const ACC = [10, 11, 12, 13];
+// Locals: 0 jOff, 1 pOff, 2 sOff, 3 n (params); 4 i, 5 c, 6 row, 7 n4, 8 ja, 9 pa (i32);
+// 10 the splatted coupling (v128); 11 … accumulators acc[h][k] = 11 + 4h + k (v128).
+const [J_OFF, P_OFF, S_OFF, N, I, C, ROW, N4, JA, PA, JV] = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
+const acc = (h: number, k: number) => 11 + 4 * h + k;
 const get = (l: number) => [0x20, l];
 const set = (l: number) => [0x21, l];
 const i32c = (v: number) => [0x41, ...sleb(v)];
@@ -42,7 +44,6 @@ const F64X2_ADD = SIMD(0xf0);
 const F64X2_MUL = SIMD(0xf2);
 const f64Load = (offset: number) => [0x2b, 3, ...uleb(offset)];
 const v128Load = (offset: number) => [...SIMD(0x00), 4, ...uleb(offset)];
-const V128_STORE = [...SIMD(0x0b), 4, 0];
 const V128_ZERO = [...SIMD(0x0c), ...new Array<number>(16).fill(0)];
 
 function sleb(v: number): number[] {
@@ -64,48 +65,69 @@ function loopWhileLess(limit: number, step: number, body: number[]): number[] {
     ...get(C), ...i32c(step), 0x6a, ...set(C), 0x0c, 0, 0x0b, 0x0b];
 }
 
-/** acc_k += splat(J[row + c + k]) · p[c + k] (both lanes). */
-function macc(k: number): number[] {
-  return [...get(ACC[k]), ...get(JA), ...f64Load(8 * k), ...F64X2_SPLAT, ...get(PA), ...v128Load(16 * k), ...F64X2_MUL, ...F64X2_ADD, ...set(ACC[k])];
+/** acc[h]_k += splat(J[row + c + k]) · p[c + k][h], for each v128 half h of the states. */
+function macc(k: number, halves: number): number[] {
+  const code = [...get(JA), ...f64Load(8 * k), ...F64X2_SPLAT, ...set(JV)];
+  for (let h = 0; h < halves; h++) {
+    code.push(...get(acc(h, k)), ...get(JV), ...get(PA), ...v128Load(16 * (halves * k + h)), ...F64X2_MUL, ...F64X2_ADD, ...set(acc(h, k)));
+  }
+  return code;
 }
 
-const ADDRESSES = [...get(ROW), ...get(C), ...i32c(3), 0x74, 0x6a, ...set(JA), ...get(P_OFF), ...get(C), ...i32c(4), 0x74, 0x6a, ...set(PA)];
+/** ja = row + 8c; pa = pOff + 16·halves·c. */
+const addresses = (halves: number) => [
+  ...get(ROW), ...get(C), ...i32c(3), 0x74, 0x6a, ...set(JA),
+  ...get(P_OFF), ...get(C), ...i32c(halves === 1 ? 4 : 5), 0x74, 0x6a, ...set(PA),
+];
 
-function rowBody(): number[] {
+/** s[i][h] = (acc[h]_0 + acc[h]_1) + (acc[h]_2 + acc[h]_3). */
+function storeSums(halves: number): number[] {
+  const code: number[] = [];
+  for (let h = 0; h < halves; h++) {
+    code.push(...get(S_OFF), ...get(I), ...i32c(halves === 1 ? 4 : 5), 0x74, 0x6a);
+    code.push(...get(acc(h, 0)), ...get(acc(h, 1)), ...F64X2_ADD, ...get(acc(h, 2)), ...get(acc(h, 3)), ...F64X2_ADD, ...F64X2_ADD);
+    code.push(...SIMD(0x0b), 4, ...uleb(16 * h));
+  }
+  return code;
+}
+
+function rowBody(halves: number): number[] {
+  const accs = Array.from({ length: 4 * halves }, (_, a) => 11 + a);
   return [
-    ...ACC.flatMap((a) => [...V128_ZERO, ...set(a)]),
+    ...accs.flatMap((a) => [...V128_ZERO, ...set(a)]),
     ...get(I), ...get(N), 0x6c, ...i32c(3), 0x74, ...get(J_OFF), 0x6a, ...set(ROW),
     ...i32c(0), ...set(C),
-    ...loopWhileLess(N4, 4, [...ADDRESSES, ...macc(0), ...macc(1), ...macc(2), ...macc(3)]),
-    ...loopWhileLess(N, 1, [...ADDRESSES, ...macc(0)]),
-    ...get(S_OFF), ...get(I), ...i32c(4), 0x74, 0x6a,
-    ...get(ACC[0]), ...get(ACC[1]), ...F64X2_ADD, ...get(ACC[2]), ...get(ACC[3]), ...F64X2_ADD, ...F64X2_ADD,
-    ...V128_STORE,
+    ...loopWhileLess(N4, 4, [...addresses(halves), ...[0, 1, 2, 3].flatMap((k) => macc(k, halves))]),
+    ...loopWhileLess(N, 1, [...addresses(halves), ...macc(0, halves)]),
+    ...storeSums(halves),
   ];
 }
 
-function functionBody(): number[] {
+function functionBody(halves: number): number[] {
   const code = [
     ...get(N), ...i32c(-4), 0x71, ...set(N4),
     ...i32c(0), ...set(I),
     0x02, 0x40, 0x03, 0x40, ...get(I), ...get(N), 0x4e, 0x0d, 1,
-    ...rowBody(),
+    ...rowBody(halves),
     ...get(I), ...i32c(1), 0x6a, ...set(I), 0x0c, 0, 0x0b, 0x0b,
     0x0b,
   ];
-  const locals = [2, 6, I32, 4, V128];
+  const locals = [2, 6, I32, 1 + 4 * halves, V128];
   return [...uleb(locals.length + code.length), ...locals, ...code];
 }
 
-/** The encoded module: imports memory e.m, exports function k(jOff, pOff, sOff, n). */
+/**
+ * The encoded module: imports memory e.m and exports k2(jOff, pOff, sOff, n) for two states
+ * (p and s interleaved by 2) and k4(…) for four states (interleaved by 4, two v128 per coupling).
+ */
 export function pairKernelBytes(): Uint8Array<ArrayBuffer> {
   const bytes = [
     0x00, 0x61, 0x73, 0x6d, 0x01, 0x00, 0x00, 0x00,
     ...section(1, [1, 0x60, 4, I32, I32, I32, I32, 0]),
     ...section(2, [1, ...str("e"), ...str("m"), 0x02, 0x00, 1]),
-    ...section(3, [1, 0]),
-    ...section(7, [1, ...str("k"), 0x00, 0]),
-    ...section(10, [1, ...functionBody()]),
+    ...section(3, [2, 0, 0]),
+    ...section(7, [2, ...str("k2"), 0x00, 0, ...str("k4"), 0x00, 1]),
+    ...section(10, [2, ...functionBody(1), ...functionBody(2)]),
   ];
   return Uint8Array.from(bytes);
 }

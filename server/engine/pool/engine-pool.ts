@@ -5,6 +5,8 @@ import { validateCellInput } from "../cell/cell-input";
 import { mergeNetworks } from "../cell/merge";
 import type { NetworkOutput } from "../cell/run-network";
 import type { NetworkTask } from "./network.worker";
+import { joinRateShares, type RateStartsShare, type RateStartsTask } from "./starts-task";
+import type { NetworkRun, RunStartsOptions } from "../equilibria/run-starts";
 
 export interface EnginePoolOptions {
   /** Worker threads. Default: every core (os.availableParallelism()). */
@@ -16,6 +18,8 @@ export interface EnginePool {
   readonly threads: number;
   /** Runs one network task in a worker. */
   run(task: NetworkTask): Promise<NetworkOutput>;
+  /** Runs one share of a rate network's starts in a worker. */
+  runStarts(task: RateStartsTask): Promise<RateStartsShare>;
   /** Stops the workers. */
   close(): Promise<void>;
 }
@@ -39,7 +43,7 @@ export function createEnginePool(options: EnginePoolOptions = {}): EnginePool {
   if (!Number.isSafeInteger(threads) || threads < 1) throw new RangeError(`threads must be a positive integer, got ${threads}`);
   const isTypeScript = import.meta.url.endsWith(".ts");
   const filename = new URL(`./network.worker.${isTypeScript ? "ts" : "js"}`, import.meta.url).href;
-  const piscina = new Piscina<NetworkTask, NetworkOutput>({
+  const piscina = new Piscina({
     filename,
     minThreads: threads,
     maxThreads: threads,
@@ -47,7 +51,8 @@ export function createEnginePool(options: EnginePoolOptions = {}): EnginePool {
   });
   return {
     threads,
-    run: (task) => piscina.run(task),
+    run: (task) => piscina.run(task) as Promise<NetworkOutput>,
+    runStarts: (task) => piscina.run(task, { name: "runRateStarts" }) as Promise<RateStartsShare>,
     close: () => piscina.destroy(),
   };
 }
@@ -67,4 +72,35 @@ export async function runCellParallel(pool: EnginePool, input: CellInput): Promi
   const tasks = Array.from({ length: valid.budget.networks }, (_, k) => pool.run({ input: valid, k }));
   const outputs = await Promise.all(tasks);
   return mergeNetworks(valid, outputs, { wallSeconds: (performance.now() - t0) / 1000, threads: pool.threads });
+}
+
+/**
+ * Runs the starts of one rate network dx/dt = −μx + J tanh(x) + I over the pool's threads:
+ * the starts are cut into `threads` contiguous shares, each run by runStarts in a worker (the
+ * basin shortcut then only knows the equilibria of its own share), and joined in share order
+ * (joinRateShares). The result depends on the number of threads, and is deterministic for a
+ * given number.
+ * @param pool an engine pool
+ * @param couplings J, row-major N×N
+ * @param mu relaxation rate μ > 0
+ * @param input constant input I (number or length-N vector)
+ * @param starts start states
+ * @param options run options (as runStarts)
+ * @returns the joined NetworkRun (no traces)
+ */
+export async function runRateStartsParallel(
+  pool: EnginePool,
+  couplings: Float64Array,
+  mu: number,
+  input: Float64Array | number,
+  starts: Float64Array[],
+  options: RunStartsOptions = {},
+): Promise<NetworkRun> {
+  const shares = Math.max(1, Math.min(pool.threads, starts.length));
+  const size = Math.ceil(starts.length / shares);
+  const tasks: RateStartsTask[] = Array.from({ length: shares }, (_, s) => ({
+    couplings, mu, input, starts: starts.slice(s * size, (s + 1) * size), offset: s * size, options,
+  }));
+  const results = await Promise.all(tasks.map((t) => pool.runStarts(t)));
+  return joinRateShares(tasks[0], results);
 }

@@ -1,4 +1,5 @@
-// Worker-thread entry of the engine pool: runs one network of a cell (runNetwork) per task.
+// Worker-thread entry of the engine pool: runs one network of a cell (runNetwork) per task, or
+// (named export runRateStarts) one share of the starts of a single rate network.
 import type { CellInput } from "../../../shared/schemas/cell-result";
 import { runNetwork, type NetworkOutput } from "../cell/run-network";
 
@@ -10,3 +11,5 @@ export interface NetworkTask {
 export default function runNetworkTask(task: NetworkTask): NetworkOutput {
   return runNetwork(task.input, task.k);
 }
+
+export { runRateStarts } from "./starts-task";

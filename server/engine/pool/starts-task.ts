@@ -1,0 +1,63 @@
+import { rateNetworkFromMatrix } from "../ensembles/rate/rate-network";
+import { analyseEquilibrium } from "../equilibria/equilibrium";
+import { EquilibriumSet } from "../equilibria/equilibrium-set";
+import { runStarts, type NetworkRun, type RunOutcome, type RunStartsOptions } from "../equilibria/run-starts";
+
+/** A share of the starts of one rate network dx/dt = −μx + J tanh(x) + I, for one worker. */
+export interface RateStartsTask {
+  couplings: Float64Array;
+  mu: number;
+  input: Float64Array | number;
+  starts: Float64Array[];
+  /** Index of the first start of this share within the whole list. */
+  offset: number;
+  options: RunStartsOptions;
+}
+
+/** What a share sends back: its equilibria (points, hits) and outcomes. */
+export interface RateStartsShare {
+  points: Float64Array[];
+  residuals: number[];
+  hits: number[];
+  outcomes: RunOutcome[];
+  counters: NetworkRun["counters"];
+}
+
+/** Worker side: runs one share of the starts (runStarts). */
+export function runRateStarts(task: RateStartsTask): RateStartsShare {
+  const network = rateNetworkFromMatrix(task.couplings, task.mu, task.input);
+  const run = runStarts(network, task.starts, task.options);
+  return {
+    points: run.equilibria.items.map((e) => e.x),
+    residuals: run.equilibria.items.map((e) => e.residual),
+    hits: [...run.equilibria.hits],
+    outcomes: run.outcomes.map((o) => ({ ...o, start: o.start + task.offset })),
+    counters: run.counters,
+  };
+}
+
+/**
+ * Joins the shares of one network's starts, in share order: equilibria are merged by the same
+ * relative distance as within a share (first occurrence kept, hits added), outcome indices
+ * remapped, spectra recomputed once per distinct equilibrium on the calling side.
+ * @param task any task of the network (for J, μ, input and mergeTol)
+ * @param shares the shares in start order
+ * @returns the combined NetworkRun (no traces)
+ */
+export function joinRateShares(task: RateStartsTask, shares: RateStartsShare[]): NetworkRun {
+  const network = rateNetworkFromMatrix(task.couplings, task.mu, task.input);
+  const set = new EquilibriumSet(task.options.mergeTol);
+  const outcomes: RunOutcome[] = [];
+  const counters = { steps: 0, accepted: 0, rejected: 0, evaluations: 0, newtonIterations: 0, refinements: 0, probeEvaluations: 0 };
+  for (const share of shares) {
+    const map = share.points.map((x, i) => {
+      let j = set.find(x);
+      if (j < 0) j = set.add(analyseEquilibrium(network, x, share.residuals[i]));
+      set.hits[j] += share.hits[i];
+      return j;
+    });
+    for (const o of share.outcomes) outcomes.push({ ...o, equilibrium: o.equilibrium < 0 ? -1 : map[o.equilibrium] });
+    for (const key of Object.keys(counters) as (keyof typeof counters)[]) counters[key] += share.counters[key];
+  }
+  return { equilibria: set, outcomes, counters, traces: [] };
+}
