@@ -29,9 +29,6 @@ import { createMapsService } from "./modules/maps/maps.service";
 import { createProbePool } from "./modules/probes/probe.pool";
 import { createProbesRouter } from "./modules/probes/probes.router";
 import { createProbesService } from "./modules/probes/probes.service";
-import { createProbePool } from "./modules/probes/probe.pool";
-import { createProbesRouter } from "./modules/probes/probes.router";
-import { createProbesService } from "./modules/probes/probes.service";
 import type { PgBoss } from "./queue/boss";
 import { createReviewRouter } from "./modules/review/review.router";
 import { createReviewService } from "./modules/review/review.service";
@@ -86,8 +83,6 @@ export function createApp(deps: AppDeps): AppHandle {
   const mapEvents = createMapEventsHub({ db, pool, logger });
   const probePool = createProbePool({ threads: 1 });
   const probes = createProbesService({ db, groups, pool: probePool, boss: deps.boss });
-  const probePool = createProbePool({ threads: 1 });
-  const probes = createProbesService({ db, groups, pool: probePool, boss: deps.boss });
   const review = createReviewService({ db, maps });
   const account = createAccountService({ db });
 
@@ -138,7 +133,6 @@ export function createApp(deps: AppDeps): AppHandle {
   app.use(createAccountRouter(account));
   app.use(createMapEventsRouter({ hub: mapEvents, canRead: (actor, id, token) => maps.getReadable(actor, id, token) }));
   app.use(createProbesRouter(probes));
-  app.use(createProbesRouter(probes));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir) {
@@ -153,7 +147,6 @@ export function createApp(deps: AppDeps): AppHandle {
     close: async () => {
       clearInterval(prune);
       await mapEvents.close();
-      await probePool.close();
       await probePool.close();
       await store.close();
     },
