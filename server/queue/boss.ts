@@ -24,16 +24,16 @@ export interface QueuePolicy {
  * 30 minutes active at most, which covers the largest admin budget measured by
  * `npm run bench:maps` with margin; jobs that exhaust their retries go to fill-cell-exhausted,
  * whose handler marks the cell and its map failed instead of leaving the map waiting forever.
- * probe-search: 2 retries, 2 hours active at most (the search limit of probes.service.ts keeps
- * N²·starts·(1 + comparison networks) within that on two threads); its handler records the
- * failure on the probe when the last attempt fails.
+ * probe-search: 2 retries, 3 hours active at most (the work limit of shared/schemas/probes.ts
+ * keeps N²·starts·(1 + comparison networks) to about 2 hours on two threads); its handler
+ * records the failure on the probe when the last attempt fails.
  */
 export const DEFAULT_QUEUE_POLICIES: Record<QueueName, QueuePolicy> = {
   [FILL_CELL_QUEUE]: { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 30 * 60, deadLetter: FILL_CELL_EXHAUSTED_QUEUE },
   [FILL_CELL_EXHAUSTED_QUEUE]: { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 5 * 60 },
   [THEORY_ROW_QUEUE]: { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 15 * 60 },
   [MAP_FINISHED_QUEUE]: { retryLimit: 3, retryDelay: 30, retryBackoff: true, expireInSeconds: 5 * 60 },
-  [PROBE_SEARCH_QUEUE]: { retryLimit: 2, retryDelay: 10, retryBackoff: true, expireInSeconds: 2 * 60 * 60 },
+  [PROBE_SEARCH_QUEUE]: { retryLimit: 2, retryDelay: 10, retryBackoff: true, expireInSeconds: 3 * 60 * 60 },
 };
 
 export interface BossOptions {

@@ -23,11 +23,13 @@ export const probeLimits = Object.freeze({
   /** Largest number of comparison networks. */
   maxCompareNetworks: 16,
   /**
-   * Largest search work N² × starts × (1 + comparison networks), by site role: about 40 minutes
-   * on two threads at the member limit (N = 2000, 64 starts, 9 networks measured at ~2.3e9
-   * multiply-adds per minute per thread; see the README's Probe API section).
+   * Largest search work N² × starts × (1 + comparison networks), by site role. Measured with
+   * `node --import tsx scripts/bench-probe.ts` on this 2-core machine (2026-12-01, 2 threads, g = 1.5,
+   * τ = 0.4, μ = 1, runs that never settle and so use the whole tMax = 200): about 1.5e7 units of
+   * work per minute; the member limit is then about 40 minutes, the admin limit about 2 hours
+   * (the probe-search queue lets a job run 3 hours).
    */
-  maxSearchWork: { member: 2.6e9, admin: 2.6e10 } as const,
+  maxSearchWork: { member: 6e8, admin: 1.8e9 } as const,
 });
 
 export const probeFormatSchema = z.enum(["csv", "npy", "mtx"]);

@@ -140,7 +140,7 @@ describe("access and searches", () => {
     expect(up.status).toBe(201);
     const over = await me.client.post(`/api/probes/${up.body.id}/search`, { starts: 512, compareNetworks: 16 });
     expect(over.status).toBe(422);
-    expect(over.body.error.message).toMatch(/Limit "search work \(N² × starts × \(1 \+ comparison networks\)\)": at most 2\.6e\+9 for members, got 7\.05e\+9/);
+    expect(over.body.error.message).toMatch(/Limit "search work \(N² × starts × \(1 \+ comparison networks\)\)": at most 6\.0e\+8 for members, got 7\.05e\+9/);
     const bad = await me.client.post(`/api/probes/${up.body.id}/search`, { starts: 0, compareNetworks: 17, rtol: 1 });
     expect(bad.status).toBe(422);
     expect(bad.body.error.issues.map((i: { path: string }) => i.path).sort()).toEqual(["compareNetworks", "rtol", "starts"]);
