@@ -46,12 +46,14 @@ type RequestOptions = { signal?: AbortSignal };
 
 async function request<T>(method: string, path: string, body?: unknown, opts: RequestOptions = {}): Promise<T> {
   let response: Response;
+  // A FormData body goes as multipart/form-data; the browser writes its Content-Type (boundary).
+  const form = body instanceof FormData;
   try {
     response = await fetch(path, {
       method,
       credentials: "same-origin",
-      headers: body === undefined ? { Accept: "application/json" } : { Accept: "application/json", "Content-Type": "application/json" },
-      body: body === undefined ? undefined : JSON.stringify(body),
+      headers: body === undefined || form ? { Accept: "application/json" } : { Accept: "application/json", "Content-Type": "application/json" },
+      body: body === undefined ? undefined : form ? body : JSON.stringify(body),
       signal: opts.signal,
     });
   } catch (cause) {
@@ -77,4 +79,6 @@ export const api = {
   patch: <T>(path: string, body: unknown, opts?: RequestOptions) => request<T>("PATCH", path, body, opts),
   put: <T>(path: string, body: unknown, opts?: RequestOptions) => request<T>("PUT", path, body, opts),
   delete: <T>(path: string, opts?: RequestOptions) => request<T>("DELETE", path, undefined, opts),
+  /** POST of files and fields as multipart/form-data. */
+  upload: <T>(path: string, form: FormData, opts?: RequestOptions) => request<T>("POST", path, form, opts),
 };
