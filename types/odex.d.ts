@@ -1,4 +1,5 @@
 // Type declarations for odex 2.0.4 (it ships none). Hairer's ODEX extrapolation solver.
+// Checked against node_modules/odex/src/odex.ts (2.0.4): members, defaults and Solution fields match.
 declare module "odex" {
   export type Derivative = (x: number, y: number[]) => number[];
   export type OutputFunction = (
@@ -16,6 +17,8 @@ declare module "odex" {
     stepSizeFac3: number; stepSizeFac4: number; stepSafetyFactor1: number; stepSafetyFactor2: number;
     relativeTolerance: number | number[]; absoluteTolerance: number | number[]; debug: boolean;
     solve(f: Derivative, x: number, y0: number[], xEnd: number, solOut?: OutputFunction): Solution;
+    /** The 1-based step-number sequence nSeq ∈ 1 … 5 of length n (index 0 unused). */
+    static stepSizeSequence(nSeq: number, n: number): number[];
     grid(dt: number, out: (x: number, y: number[]) => void): OutputFunction;
   }
 }

@@ -68,6 +68,7 @@ export interface IntegrationResult {
   counters: IntegrationCounters;
 }
 
+/** Fresh all-zero counters. */
 export function emptyCounters(): IntegrationCounters {
   return { steps: 0, accepted: 0, rejected: 0, evaluations: 0 };
 }
