@@ -29,13 +29,14 @@ function isRateLike(net: Network): net is RateLike {
  * state as the network's own rhs, so every row equals rhs bit for bit (tested); otherwise the
  * network unchanged (rows are evaluated one by one).
  * @param network the network
+ * @param options simd: use the WebAssembly kernel where available (default true)
  * @returns an OdeSystem, possibly with rhsBatch
  */
-export function batchedSystem(network: Network): OdeSystem & Partial<BatchRhs> {
+export function batchedSystem(network: Network, options: { simd?: boolean } = {}): OdeSystem & Partial<BatchRhs> {
   const own = network as Network & Partial<BatchRhs>;
   if (typeof own.rhsBatch === "function") return own;
   if (!isRateLike(network)) return network;
-  return new RateBatch(network);
+  return new RateBatch(network, options.simd ?? true);
 }
 
 class RateBatch implements OdeSystem, BatchRhs {
@@ -43,9 +44,9 @@ class RateBatch implements OdeSystem, BatchRhs {
   private phi = new Float64Array(0);
   private readonly wasm: WasmPair | null;
 
-  constructor(private readonly net: RateLike) {
+  constructor(private readonly net: RateLike, simd: boolean) {
     this.n = net.n;
-    const mod = pairKernelModule();
+    const mod = simd ? pairKernelModule() : null;
     this.wasm = mod ? new WasmPair(mod, net.couplings, net.n) : null;
   }
 
@@ -65,21 +66,32 @@ class RateBatch implements OdeSystem, BatchRhs {
       if (this.wasm) this.wasmRows(xs, out, r, 2);
       else this.pair(xs, out, r * n, (r + 1) * n);
     }
-    if (r < count) this.single(xs, out, r * n);
+    if (r < count) {
+      if (this.wasm) this.wasmRows(xs, out, r, 2, 1);
+      else this.single(xs, out, r * n);
+    }
   }
 
-  /** Rows first … first+width−1 (width 2 or 4) through the SIMD kernel. */
-  private wasmRows(xs: Float64Array, out: Float64Array, first: number, width: 2 | 4): void {
+  /**
+   * Rows first … first+width−1 (width 2 or 4) through the SIMD kernel; `rows` < width fills the
+   * missing lanes with copies of the last row and discards their sums.
+   */
+  private wasmRows(xs: Float64Array, out: Float64Array, first: number, width: 2 | 4, rows: number = width): void {
     const { n } = this;
     const { input, mu } = this.net;
     const w = this.wasm!;
+    const wp = w.p;
+    const ws = w.s;
     const p = this.phi;
     const base = first * n;
-    for (let c = 0; c < n; c++) for (let q = 0; q < width; q++) w.p[width * c + q] = p[base + q * n + c];
-    w.run(width);
     for (let q = 0; q < width; q++) {
+      const src = base + Math.min(q, rows - 1) * n;
+      for (let c = 0; c < n; c++) wp[width * c + q] = p[src + c];
+    }
+    w.run(width);
+    for (let q = 0; q < rows; q++) {
       const a = base + q * n;
-      for (let i = 0; i < n; i++) out[a + i] = -mu * xs[a + i] + w.s[width * i + q] + input[i];
+      for (let i = 0; i < n; i++) out[a + i] = -mu * xs[a + i] + ws[width * i + q] + input[i];
     }
   }
 

@@ -12,9 +12,15 @@ export interface Dopri5Settings {
   maxSteps: number;
 }
 
+// Module-local copies: imported bindings can compile to property getters (CommonJS interop in
+// worker threads), which must stay out of the per-element loops.
 const EXPO1 = 1 / ORDER - 0.75 * CONTROL.beta;
 const FACC1 = 1 / CONTROL.facMin;
 const FACC2 = 1 / CONTROL.facMax;
+const BETA = CONTROL.beta;
+const SAFETY = CONTROL.safety;
+const STAGES: readonly (readonly number[])[] = A.map((row) => [...row]);
+const [E1, , E3, E4, E5, E6, E7] = E;
 const STAGE_COUNT = 7;
 
 /**
@@ -137,7 +143,7 @@ export class Dopri5Batch {
     this.prepareSteps(m);
     for (let s = 0; s < STAGE_COUNT - 1; s++) {
       const target = s === STAGE_COUNT - 2 ? this.ynew : this.ytmp;
-      this.combine(m, A[s], target);
+      this.combine(m, STAGES[s], target);
       this.evaluate(target, this.k[s], m);
     }
     for (let r = 0; r < m; r++) {
@@ -209,13 +215,14 @@ export class Dopri5Batch {
     const { rtol, atol } = this.settings;
     const n = this.n;
     const base = r * n;
-    const k = this.k;
+    const [, k3, k4, k5, k6, k7] = this.k;
+    const { f, x, ynew } = this;
     const h = this.h[r];
     let sum = 0;
     for (let i = base; i < base + n; i++) {
       const e =
-        h * (E[0] * this.f[i] + E[2] * k[1][i] + E[3] * k[2][i] + E[4] * k[3][i] + E[5] * k[4][i] + E[6] * k[5][i]);
-      const sk = atol + rtol * Math.max(Math.abs(this.x[i]), Math.abs(this.ynew[i]));
+        h * (E1 * f[i] + E3 * k3[i] + E4 * k4[i] + E5 * k5[i] + E6 * k6[i] + E7 * k7[i]);
+      const sk = atol + rtol * Math.max(Math.abs(x[i]), Math.abs(ynew[i]));
       sum += (e / sk) * (e / sk);
     }
     return Math.sqrt(sum / n);
@@ -227,8 +234,8 @@ export class Dopri5Batch {
     const h = this.h[r];
     const fac11 = Math.pow(err, EXPO1);
     if (err <= 1) {
-      let fac = fac11 / Math.pow(this.facOld[r], CONTROL.beta);
-      fac = Math.max(FACC2, Math.min(FACC1, fac / CONTROL.safety));
+      let fac = fac11 / Math.pow(this.facOld[r], BETA);
+      fac = Math.max(FACC2, Math.min(FACC1, fac / SAFETY));
       let hNew = h / fac;
       if (this.lastRejected[r]) hNew = Math.min(hNew, h);
       this.facOld[r] = Math.max(err, 1e-4);
@@ -242,7 +249,7 @@ export class Dopri5Batch {
       this.accepted[r] += 1;
       if (this.t[r] >= this.settings.tMax) this.status[r] = ROW.tMax;
     } else {
-      this.h[r] = h / Math.min(FACC1, fac11 / CONTROL.safety);
+      this.h[r] = h / Math.min(FACC1, fac11 / SAFETY);
       this.lastRejected[r] = 1;
       this.rejected[r] += 1;
     }

@@ -4,17 +4,17 @@ import { rateNetworkFromMatrix } from "../../../../server/engine/ensembles/rate/
 import { createRng } from "../../../../server/engine/random/rng";
 
 describe("batchedSystem", () => {
-  it("evaluates each row of a rate network exactly as its own rhs does (bit for bit)", () => {
-    for (const n of [1, 5, 13]) {
+  it.each([true, false])("evaluates each row of a rate network exactly as its own rhs does (bit for bit; SIMD %s)", (simd) => {
+    for (const n of [1, 5, 13, 64]) {
       const rng = createRng(42, n);
       const j = new Float64Array(n * n);
       rng.fillNormal(j);
       const input = new Float64Array(n);
       rng.fillNormal(input);
       const net = rateNetworkFromMatrix(j, 0.7, input);
-      const sys = batchedSystem(net);
+      const sys = batchedSystem(net, { simd });
       expect(typeof sys.rhsBatch).toBe("function");
-      const count = 5; // odd: exercises both the pair and the single kernel
+      const count = 7; // 4 + 2 + 1: exercises the four-, two- and one-state kernels
       const xs = new Float64Array(count * n);
       rng.fillNormal(xs);
       const out = new Float64Array(count * n);
