@@ -35,6 +35,16 @@ export interface JobWorkers {
 
 type Handle = (job: PgBoss.JobWithMetadata<unknown>) => Promise<unknown>;
 
+/** Runs a handler; a failure is logged (pg-boss only records it on the job) and rethrown so the job is retried. */
+async function logFailure(logger: Logger, queue: QueueName, job: PgBoss.JobWithMetadata<unknown>, handle: Handle): Promise<unknown> {
+  try {
+    return await handle(job);
+  } catch (err) {
+    logger.warn(`${queue} job failed; pg-boss retries it`, { job: job.id, attempt: job.retryCount + 1, of: job.retryLimit + 1, message: (err as Error).message });
+    throw err;
+  }
+}
+
 /**
  * Subscribes this process to the map queues: `concurrency` independent fetch loops each for
  * fill-cell and theory-row (one job per loop at a time, so at most `concurrency` cells are in
@@ -61,7 +71,7 @@ export async function startJobWorkers(o: JobWorkersOptions): Promise<JobWorkers>
       const self = { id: "" };
       self.id = await o.boss.work<unknown>(queue, options, async (jobs) => {
         let outcome: unknown;
-        for (const job of jobs) outcome = await handle(job);
+        for (const job of jobs) outcome = await logFailure(o.logger, queue, job, handle);
         o.boss.notifyWorker(self.id);
         return outcome === undefined ? undefined : { outcome };
       });

@@ -67,7 +67,8 @@ describe("GET /api/maps/:id/events", () => {
 
     workers = await startJobWorkers({ db: app.database.db, boss: app.boss!, compute, workerName: "sse-test:1", logger, pollingIntervalSeconds: 0.5 });
     for (const stream of [mine, viaLink]) {
-      await stream.until((ev) => cellsDone(ev) === 9 && ev.some((e) => e.event === "status" && e.data.status === "done"));
+      // Generous: on a loaded machine the pool's first threads take a while to load the engine.
+      await stream.until((ev) => cellsDone(ev) === 9 && ev.some((e) => e.event === "status" && e.data.status === "done"), 90_000);
       const cells = stream.events.filter((e) => e.event === "cell" && e.data.state === "done");
       for (const c of cells) {
         expect(c.data.stable.n).toBe(2); // one estimate per network: the budget's 2 networks
@@ -83,7 +84,7 @@ describe("GET /api/maps/:id/events", () => {
     for (const c of withTheory) expect(c.data.theory.m).toBeCloseTo(c.data.mu / 1, 12);
     mine.close();
     viaLink.close();
-  });
+  }, 150_000);
 
   it("tells subscribers when the map is cancelled", async () => {
     const owner = await signedInPerson(app, "owner");

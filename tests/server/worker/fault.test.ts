@@ -16,7 +16,9 @@ import { spawnWorker, type WorkerProcess } from "./worker-process";
 // about a second each on one thread, so a kill lands inside a cell, not between two.
 
 const SLOW_MAP: MapSpec = { ...SMALL_RATE_MAP, settings: { ...SMALL_RATE_MAP.settings, N: 30 }, budget: { ...SMALL_RATE_MAP.budget, networks: 8, starts: 48 } };
-const EXPIRE_SECONDS = 3;
+// Long enough that a cell never outlives it on a loaded machine (cells ~1 s unloaded), short enough
+// that the dead worker's job comes back quickly.
+const EXPIRE_SECONDS = 10;
 
 let testDb: TestDatabase;
 let database: Database;
@@ -59,14 +61,21 @@ async function midMap(mapId: string): Promise<void> {
     const p = await readMapProgress(database.db, mapId);
     const active = (await jobStates(mapId)).some((j) => j.state === "active");
     return p && p.cellsDone >= 1 && p.cellsDone < p.cellsTotal && active ? true : undefined;
-  }, 60_000, "a finished cell and an active job");
+  }, 60_000, "a finished cell and an active job").catch((err: Error) => {
+    throw new Error(`${err.message}\n${outputs()}`);
+  });
 }
+
+/** The worker processes' output, for a failure message. */
+const outputs = () => spawned.map((w, k) => `--- worker ${k} ---\n${w.output()}`).join("\n");
 
 async function expectCompleteOnce(mapId: string, keys: string[]): Promise<void> {
   const p = await waitFor(async () => {
     const q = await readMapProgress(database.db, mapId);
     return q?.status === "done" ? q : undefined;
-  }, 90_000, "map done");
+  }, 90_000, "map done").catch((err: Error) => {
+    throw new Error(`${err.message}\n${outputs()}`);
+  });
   expect(p).toMatchObject({ cellsTotal: 9, cellsDone: 9, cellsFromCache: 0 });
   const rows = await database.db.select({ key: cells.key }).from(cells).where(sql`${cells.key} in ${keys}`);
   expect(rows.map((r) => r.key).sort()).toEqual([...new Set(keys)].sort());
