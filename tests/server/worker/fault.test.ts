@@ -97,7 +97,7 @@ describe("worker process faults", () => {
     expect(await second.exited).toBe(0);
     // The job that was active when the process died ran again (pg-boss counts the retry).
     expect((await jobStates(map.id)).some((j) => j.retry_count >= 1)).toBe(true);
-  }, 120_000);
+  }, 240_000);
 
   it("SIGTERM hands the running job back and exits cleanly; the next worker finishes the map", async () => {
     const owner = await insertUser(database.db);
@@ -108,5 +108,5 @@ describe("worker process faults", () => {
     expect(await first.exited).toBe(0);
     await start();
     await expectCompleteOnce(map.id, map.cellKeys.flat());
-  }, 120_000);
+  }, 240_000);
 });
