@@ -1,5 +1,6 @@
 // Takes a screenshot of every client page at 1280 px and 390 px wide into .data/screenshots/
-// (tour-*.png), against the real app on a private throwaway PostgreSQL seeded with the demo lab.
+// (tour-*.png), against the real app (with a map worker) on a private throwaway PostgreSQL
+// seeded with the demo lab; the map screens come from scripts/screenshots-maps.ts.
 // Run: node --import tsx scripts/screenshots.ts   (SHOTS_PG_PORT picks the database port, default 54332)
 import { execFileSync } from "node:child_process";
 import { rmSync } from "node:fs";
@@ -10,6 +11,7 @@ import { DEMO_PASSWORD, demoPeople } from "../server/db/seed/demo-lab";
 import { DESKTOP, launchBrowser, PHONE, screenshot, SCREENSHOT_DIR } from "../tests/helpers/browser";
 import { prepareTemplateDatabase } from "../tests/helpers/db-template";
 import { startE2eApp } from "../tests/helpers/e2e-app";
+import { mapPages, mapPagesSignedOut } from "./screenshots-maps";
 
 const ROOT = path.resolve(import.meta.dirname, "..");
 const PORT = Number(process.env.SHOTS_PG_PORT ?? 54332);
@@ -127,13 +129,22 @@ async function otherAccounts(page: Page, base: string, inviteLink: string) {
   await take(page, "group-detail-editor");
 }
 
+/** The map screens, as the lab head (the group's maps are shared with the Quillfeather group). */
+async function mapScreens(page: Page, base: string) {
+  await signIn(page, base, head.email);
+  const groups = await page.evaluate(() => fetch("/api/groups").then((r) => r.json()));
+  const link = await mapPages(page, base, take, groups.items?.[0]?.id ?? null);
+  await signOut(page, base);
+  await mapPagesSignedOut(page, take, link);
+}
+
 async function main() {
   pg("pg_up");
   try {
     await prepareTemplateDatabase(`postgres://postgres@127.0.0.1:${PORT}/postgres`);
     process.env.TEST_DATABASE_ADMIN_URL = `postgres://postgres@127.0.0.1:${PORT}/postgres`;
     execFileSync("npx", ["vite", "build", "--logLevel", "error", "--outDir", CLIENT_DIR], { cwd: ROOT, stdio: "inherit" });
-    const app = await startE2eApp({ clientDir: CLIENT_DIR });
+    const app = await startE2eApp({ clientDir: CLIENT_DIR, worker: true });
     const browser = await launchBrowser();
     try {
       await app.seedDemo();
@@ -141,6 +152,8 @@ async function main() {
       await signedOutPages(page, app.baseUrl);
       const inviteLink = await signedInPages(page, app.baseUrl);
       await otherAccounts(page, app.baseUrl, inviteLink);
+      await signOut(page, app.baseUrl);
+      await mapScreens(page, app.baseUrl);
       if (browser.problems.length) console.warn(`[screenshots] page problems:\n  ${browser.problems.join("\n  ")}`);
       console.log(`[screenshots] ${shot} pages × 2 widths in ${SCREENSHOT_DIR}`);
     } finally {

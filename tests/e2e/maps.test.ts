@@ -55,9 +55,9 @@ describe("map journey in chromium", () => {
 
   it("fills the form, sees the estimate and launches", async () => {
     await page.getByLabel("Title").fill(title);
-    // N = 24 with 4 networks × 8 starts keeps each cell around a second on one engine thread,
+    // N = 32 with 4 networks × 8 starts keeps each cell around a second on one engine thread,
     // long enough to watch the grid fill while the page is open.
-    await setNumber(page, "Units N", "24");
+    await setNumber(page, "Units N", "32");
     await setNumber(page, "Steps", String(MU_STEPS), 0);
     await setNumber(page, "Steps", String(TAU_STEPS), 1);
     await setNumber(page, "Networks per cell K", "4");
@@ -80,7 +80,7 @@ describe("map journey in chromium", () => {
     await expect.poll(() => pendingCells(page), { timeout: 60_000 }).toBeLessThan(before);
     await screenshot(page, "maps-02-filling");
     await expect.poll(() => pendingCells(page), { timeout: 120_000, intervals: [500] }).toBe(0);
-    await expect.poll(() => page.getByText(`${MU_STEPS * TAU_STEPS} of ${MU_STEPS * TAU_STEPS} cells`).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(`${MU_STEPS * TAU_STEPS} of ${MU_STEPS * TAU_STEPS} cells`, { exact: true }).isVisible()).toBe(true);
     // Same document all along: the cells arrived over the event stream, not by reloading.
     expect(await page.evaluate(() => (window as unknown as { stayedOpen?: boolean }).stayedOpen)).toBe(true);
     await screenshot(page, "maps-03-done");
@@ -121,7 +121,7 @@ describe("map journey in chromium", () => {
     const dialog = page.getByRole("dialog", { name: "Share this map" });
     await dialog.getByLabel("Anyone with the link").check();
     await dialog.getByRole("button", { name: "Save and create link" }).click();
-    const link = dialog.getByLabel("Read-only link");
+    const link = dialog.getByLabel("Read-only link", { exact: true });
     await expect.poll(() => link.isVisible(), { timeout: 10_000 }).toBe(true);
     shareLink = await link.inputValue();
     expect(shareLink).toMatch(new RegExp(`^${app.baseUrl}/s/[A-Za-z0-9_-]+$`));

@@ -66,7 +66,7 @@ function MapsPanel() {
   return (
     <Card className="lg:col-span-2">
       <CardHeader title="Maps" description="Maps you made, your groups' maps, and maps shared with you." actions={<Link to="/maps/new" className={buttonClass("primary", "sm")}>New map</Link>} />
-      <div className="flex flex-col gap-3 border-b border-line px-5 py-3 sm:flex-row sm:items-center sm:justify-between">
+      <div className="flex flex-wrap items-center justify-between gap-3 border-b border-line px-5 py-3">
         <div role="tablist" aria-label="Which maps" className="flex flex-wrap gap-1">
           {SCOPES.map((s) => (
             <button
@@ -81,13 +81,17 @@ function MapsPanel() {
             </button>
           ))}
         </div>
-        <div className="flex gap-2">
-          <SearchBox value={filters.q ?? ""} onSearch={(q) => change({ q: q || undefined })} label="Search maps" placeholder="Search maps" className="sm:w-52" />
-          <select aria-label="Sort maps" value={filters.sort} onChange={(e) => change({ sort: e.target.value as MapListFilters["sort"] })} className={cn(controlClass(false), "w-auto pr-8")}>
-            <option value="newest">Newest</option>
-            <option value="oldest">Oldest</option>
-            <option value="title">Title</option>
-          </select>
+        <div className="flex w-full gap-2 sm:w-auto">
+          <div className="min-w-0 flex-1 sm:w-56 sm:flex-none">
+            <SearchBox value={filters.q ?? ""} onSearch={(q) => change({ q: q || undefined })} label="Search maps" placeholder="Search maps" className="sm:w-full" />
+          </div>
+          <div className="w-32 shrink-0">
+            <select aria-label="Sort maps" value={filters.sort} onChange={(e) => change({ sort: e.target.value as MapListFilters["sort"] })} className={cn(controlClass(false), "pr-8")}>
+              <option value="newest">Newest</option>
+              <option value="oldest">Oldest</option>
+              <option value="title">By title</option>
+            </select>
+          </div>
         </div>
       </div>
       <CardBody>

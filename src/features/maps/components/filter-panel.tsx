@@ -16,8 +16,8 @@ function CriterionRow({ c, index, ensemble, onChange, onRemove }: { c: Criterion
   const share = layers[c.layer].kind === "share";
   const n = index + 1;
   return (
-    <li className="grid grid-cols-[minmax(0,1fr)_4.2rem_5.2rem_auto] items-center gap-1.5">
-      <select aria-label={`Condition ${n}: layer`} className={small} value={c.layer} onChange={(e) => onChange({ ...c, layer: e.target.value as LayerId })}>
+    <li className="grid grid-cols-[4.2rem_minmax(0,1fr)_auto] items-center gap-1.5 rounded-lg bg-paper p-1.5">
+      <select aria-label={`Condition ${n}: layer`} className={cn(small, "col-span-3")} value={c.layer} onChange={(e) => onChange({ ...c, layer: e.target.value as LayerId })}>
         {filterableLayers(layersFor(ensemble)).map((l) => (
           <option key={l.id} value={l.id}>
             {l.label}

@@ -31,7 +31,7 @@ export function MapCard({ map, myId }: { map: MapView; myId: string }) {
       <Thumbnail map={map} />
       <div className="flex min-w-0 flex-1 flex-col gap-1.5">
         <div className="flex items-start justify-between gap-2">
-          <h3 className="min-w-0 truncate text-[0.95rem] font-semibold text-ink group-hover:text-well-700">{map.title}</h3>
+          <h3 className="line-clamp-2 min-w-0 text-[0.95rem] font-semibold text-ink group-hover:text-well-700">{map.title}</h3>
           <StatusBadge status={map.status} />
         </div>
         <p className="text-xs text-ink-soft">

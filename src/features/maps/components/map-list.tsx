@@ -28,7 +28,7 @@ export function MapList({ filters, myId }: { filters: MapListFilters; myId: stri
     );
   }
   return (
-    <ul className="grid grid-cols-1 gap-3 md:grid-cols-2" aria-label="Maps">
+    <ul className="flex flex-col gap-3" aria-label="Maps">
       {items.map((m) => (
         <li key={m.id}>
           <MapCard map={m} myId={myId} />

@@ -13,6 +13,9 @@ const fmt = (v: unknown) => formatNumber(Number(v));
 interface FigureAxesProps {
   x: ContinuousPixelScale;
   y: ContinuousPixelScale;
+  /** Cell centres along μ and τ (ticks never go past them: the axis has no values beyond). */
+  mus: number[];
+  taus: number[];
   plotWidth: number;
   plotHeight: number;
   /** μ_c: draws a second μ axis on top in m = μ/μ_c. */
@@ -27,16 +30,30 @@ function relativeScale(x: ContinuousPixelScale, muCritical: number, muLog: boole
   return muLog ? scaleLog<number>(config) : scaleLinear<number>(config);
 }
 
+/**
+ * Tick values of a grid axis: the cell centres themselves when they fit, else the scale's round
+ * ticks inside the range the cells cover (half a cell beyond the ends holds no data).
+ */
+export function gridTicks(scale: ContinuousPixelScale, points: number[], room: number): number[] {
+  if (points.length <= room) return points;
+  const lo = points[0];
+  const hi = points[points.length - 1];
+  const eps = (hi - lo) * 1e-9;
+  return (scale.ticks(room) as number[]).filter((v) => v >= lo - eps && v <= hi + eps);
+}
+
 /** μ along the bottom, τ up the left side, and m = μ/μ_c along the top where the map has μ_c. */
-export function FigureAxes({ x, y, plotWidth, plotHeight, muCritical, muLog }: FigureAxesProps) {
+export function FigureAxes({ x, y, mus, taus, plotWidth, plotHeight, muCritical, muLog }: FigureAxesProps) {
   const xTicks = Math.max(2, Math.floor(plotWidth / 90));
   const yTicks = Math.max(2, Math.floor(plotHeight / 48));
+  const muTicks = gridTicks(x, mus, xTicks);
+  const m = muCritical != null && muCritical > 0 ? relativeScale(x, muCritical, muLog) : null;
   return (
     <g>
       <AxisBottom
         top={plotHeight}
         scale={x}
-        numTicks={xTicks}
+        tickValues={muTicks}
         tickFormat={fmt}
         stroke={SPECIAL_FILLS.inkSoft}
         tickStroke={SPECIAL_FILLS.inkSoft}
@@ -47,7 +64,7 @@ export function FigureAxes({ x, y, plotWidth, plotHeight, muCritical, muLog }: F
       />
       <AxisLeft
         scale={y}
-        numTicks={yTicks}
+        tickValues={gridTicks(y, taus, yTicks)}
         tickFormat={fmt}
         stroke={SPECIAL_FILLS.inkSoft}
         tickStroke={SPECIAL_FILLS.inkSoft}
@@ -56,15 +73,15 @@ export function FigureAxes({ x, y, plotWidth, plotHeight, muCritical, muLog }: F
         labelProps={{ ...axisLabel, textAnchor: "middle" }}
         labelOffset={26}
       />
-      {muCritical != null && muCritical > 0 && (
+      {m && (
         <AxisTop
-          scale={relativeScale(x, muCritical, muLog)}
-          numTicks={xTicks}
+          scale={m}
+          tickValues={gridTicks(m, mus.map((v) => v / muCritical!), xTicks)}
           tickFormat={fmt}
           stroke={SPECIAL_FILLS.inkSoft}
           tickStroke={SPECIAL_FILLS.inkSoft}
           tickLabelProps={tickLabel}
-          label={`m = μ/μ_c  (μ_c = ${formatNumber(muCritical)})`}
+          label={`m = μ/μ_c  (μ_c = ${formatNumber(muCritical!)})`}
           labelProps={{ ...axisLabel, textAnchor: "middle" }}
           labelOffset={12}
         />

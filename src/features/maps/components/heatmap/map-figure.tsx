@@ -58,7 +58,7 @@ export const MapFigure = memo(function MapFigure({ map, grid, layerId, criteria,
   const paints = useMemo(() => cellPaints(grid, layerId, values, scale, criteria, ids), [grid, layerId, values, scale, criteria, ids]);
   const settings = useMemo(() => settingsLine(map), [map]);
   const counts = stateCounts(grid);
-  const subtitle = [`${scale.layer.label} over relaxation rate μ and asymmetry τ`, `${counts.done} of ${grid.cells.length} cells computed`];
+  const subtitle = [`${scale.layer.label} over relaxation rate μ and asymmetry τ`, `${counts.done} of ${grid.cells.length} cells done`];
   const L = figureLayout(width, { mu: grid.muSteps, tau: grid.tauSteps }, map.muCritical != null, scale, { settings, subtitle });
   const x = useMemo(() => axisScale(map.mu, [0, L.plotWidth]), [map.mu, L.plotWidth]);
   const y = useMemo(() => axisScale(map.tau, [L.plotHeight, 0]), [map.tau, L.plotHeight]);
@@ -119,7 +119,7 @@ export const MapFigure = memo(function MapFigure({ map, grid, layerId, criteria,
         {ringBox && (
           <rect data-export="skip" pointerEvents="none" x={ringBox.x.start} y={ringBox.y.start} width={ringBox.x.size} height={ringBox.y.size} fill="none" stroke={SPECIAL_FILLS.ink} strokeWidth={2} />
         )}
-        <FigureAxes x={x} y={y} plotWidth={L.plotWidth} plotHeight={L.plotHeight} muCritical={map.muCritical} muLog={map.mu.scale === "log"} />
+        <FigureAxes x={x} y={y} mus={grid.mus} taus={grid.taus} plotWidth={L.plotWidth} plotHeight={L.plotHeight} muCritical={map.muCritical} muLog={map.mu.scale === "log"} />
       </g>
       <g transform={`translate(${L.left},${L.legendTop})`}>
         <ColorLegend scale={scale} width={L.legendWidth} extras={extras} patterns={ids} gradientId={ids.gradient} />
