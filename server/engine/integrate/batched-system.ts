@@ -6,7 +6,7 @@ import { pairKernelModule } from "./pair-kernel-wasm";
 interface RateLike extends Network {
   readonly couplings: Float64Array;
   readonly input: Float64Array;
-  readonly nonlinearity: { apply(x: Float64Array, out: Float64Array): void };
+  readonly nonlinearity: { readonly id?: string; apply(x: Float64Array, out: Float64Array): void };
 }
 
 function isRateLike(net: Network): net is RateLike {
@@ -43,11 +43,13 @@ class RateBatch implements OdeSystem, BatchRhs {
   readonly n: number;
   private phi = new Float64Array(0);
   private readonly wasm: WasmPair | null;
+  private readonly isTanh: boolean;
 
   constructor(private readonly net: RateLike, simd: boolean) {
     this.n = net.n;
     const mod = simd ? pairKernelModule() : null;
     this.wasm = mod ? new WasmPair(mod, net.couplings, net.n) : null;
+    this.isTanh = net.nonlinearity.id === "tanh";
   }
 
   rhs(x: Float64Array, out: Float64Array): void {
@@ -57,9 +59,9 @@ class RateBatch implements OdeSystem, BatchRhs {
   rhsBatch(xs: Float64Array, out: Float64Array, count: number): void {
     const n = this.n;
     if (this.phi.length < count * n) this.phi = new Float64Array(count * n);
-    const phi = this.phi;
-    const view = phi.subarray(0, count * n);
-    this.net.nonlinearity.apply(xs.subarray(0, count * n), view);
+    // tanh is written straight into the kernel's interleaved buffer (Math.tanh, as the "tanh"
+    // nonlinearity computes it); any other φ goes through its own apply first.
+    if (!(this.wasm && this.isTanh)) this.net.nonlinearity.apply(xs.subarray(0, count * n), this.phi.subarray(0, count * n));
     let r = 0;
     if (this.wasm) for (; r + 3 < count; r += 4) this.wasmRows(xs, out, r, 4);
     for (; r + 1 < count; r += 2) {
@@ -86,7 +88,8 @@ class RateBatch implements OdeSystem, BatchRhs {
     const base = first * n;
     for (let q = 0; q < width; q++) {
       const src = base + Math.min(q, rows - 1) * n;
-      for (let c = 0; c < n; c++) wp[width * c + q] = p[src + c];
+      if (this.isTanh) for (let c = 0; c < n; c++) wp[width * c + q] = Math.tanh(xs[src + c]);
+      else for (let c = 0; c < n; c++) wp[width * c + q] = p[src + c];
     }
     w.run(width);
     for (let q = 0; q < rows; q++) {
