@@ -22,6 +22,10 @@ import { MapViewPage, mapViewLoader } from "./routes/maps/map-view";
 import { NewMapPage, newMapLoader } from "./routes/maps/new-map";
 import { SharedCellPage, sharedCellLoader, SharedLayout, SharedMapPage, sharedMapLoader } from "./routes/maps/shared-map";
 import { NotFoundPage } from "./routes/not-found";
+import { AccountPage, accountLoader } from "./routes/account/account";
+import { ComparePage, compareLoader } from "./routes/review/compare";
+import { ImportMapPage } from "./routes/review/import-map";
+import { ReportPage, reportLoader } from "./routes/review/report";
 
 /**
  * Every page of the client. Signed-out pages sit at the top; the signed-in area shares the
@@ -54,6 +58,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             },
           ],
         },
+        // The printable report has no app chrome (it prints as it shows); its loader asks for a user.
+        { path: "maps/:mapId/report", loader: reportLoader(queryClient), element: <ReportPage />, errorElement: <RouteError fullPage /> },
         {
           id: "signed-in",
           loader: requireUser(queryClient),
@@ -66,6 +72,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                 { path: "maps/new", loader: newMapLoader(queryClient), element: <NewMapPage /> },
                 { path: "maps/:mapId", loader: mapViewLoader(queryClient), element: <MapViewPage /> },
                 { path: "maps/:mapId/cells/:i/:j", loader: cellDetailLoader(queryClient), element: <CellDetailPage /> },
+                { path: "maps/import", element: <ImportMapPage /> },
+                { path: "maps/:mapId/compare/:otherId", loader: compareLoader(queryClient), element: <ComparePage /> },
+                { path: "account", loader: accountLoader(queryClient), element: <AccountPage /> },
                 { path: "groups", loader: groupsListLoader(queryClient), element: <GroupsListPage /> },
                 { path: "groups/:groupId", loader: groupDetailLoader(queryClient), element: <GroupDetailPage /> },
                 {

@@ -63,6 +63,17 @@ export function AccountMenu({ user }: { user: User }) {
           <button
             type="button"
             role="menuitem"
+            onClick={() => {
+              setOpen(false);
+              navigate("/account");
+            }}
+            className="w-full rounded-lg px-3 py-2 text-left text-sm text-ink hover:bg-well-50"
+          >
+            Account settings
+          </button>
+          <button
+            type="button"
+            role="menuitem"
             onClick={doSignOut}
             disabled={signOut.isPending}
             className="w-full rounded-lg px-3 py-2 text-left text-sm text-ink hover:bg-well-50"

@@ -65,7 +65,7 @@ function MapsPanel() {
   };
   return (
     <Card className="lg:col-span-2">
-      <CardHeader title="Maps" description="Maps you made, your groups' maps, and maps shared with you." actions={<Link to="/maps/new" className={buttonClass("primary", "sm")}>New map</Link>} />
+      <CardHeader title="Maps" description="Maps you made, your groups' maps, and maps shared with you." actions={<><Link to="/maps/import" className={buttonClass("secondary", "sm")}>Import manifest</Link><Link to="/maps/new" className={buttonClass("primary", "sm")}>New map</Link></>} />
       <div className="flex flex-wrap items-center justify-between gap-3 border-b border-line px-5 py-3">
         <div role="tablist" aria-label="Which maps" className="flex flex-wrap gap-1">
           {SCOPES.map((s) => (

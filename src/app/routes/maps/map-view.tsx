@@ -16,6 +16,7 @@ import { MapWorkspace } from "../../../features/maps/components/map-workspace";
 import { ShareDialog } from "../../../features/maps/components/share-dialog";
 import { useMapEvents } from "../../../features/maps/hooks/use-map-events";
 import { ENSEMBLE_LABELS } from "../../../features/maps/lib/map-settings";
+import { ReviewActions } from "../review/review-actions";
 
 export const mapViewLoader =
   (queryClient: QueryClient) =>
@@ -79,7 +80,12 @@ export function MapViewPage() {
       <PageHeader
         title={m.title}
         description={`${ENSEMBLE_LABELS[m.ensemble] ?? m.ensemble}, N = ${String(m.settings.N)} · by ${m.ownerName}${m.description ? ` · ${m.description}` : ""}`}
-        actions={<MapActions id={id} access={m.access} status={m.status} onShare={() => setSharing(true)} />}
+        actions={
+          <>
+            <ReviewActions map={m} />
+            <MapActions id={id} access={m.access} status={m.status} onShare={() => setSharing(true)} />
+          </>
+        }
       />
       <Card className="mb-6">
         <CardBody>
