@@ -93,6 +93,7 @@ async function runOnce(database: Database, url: string, threads: number, seed: n
   const wallSeconds = (performance.now() - t0) / 1000;
   await workers.stop();
   await boss.stop({ graceful: true, timeout: 5000 });
+  await workers.close();
   await compute.close();
   const [stats] = await database.db
     .select({ n: sql<number>`count(*)::int`, mean: sql<number>`avg(${cells.computeSeconds})` })

@@ -61,6 +61,7 @@ async function shutdown(signal: string): Promise<void> {
   await workers.stop();
   // Waits for running jobs up to the timeout, then fails the rest so pg-boss retries them.
   await boss.stop({ graceful: true, wait: true, timeout: env.WORKER_STOP_SECONDS * 1000 });
+  await workers.close();
   await compute.close();
   mailer.close();
   await database.close();

@@ -31,6 +31,8 @@ export interface JobWorkers {
   readonly ids: string[];
   /** Stops fetching new jobs (in-flight ones finish; boss.stop() waits for them). */
   stop(): Promise<void>;
+  /** After boss.stop(): closes the probe pool made here (none when one was passed in). */
+  close(): Promise<void>;
 }
 
 type Handle = (job: PgBoss.JobWithMetadata<unknown>) => Promise<unknown>;
@@ -56,7 +58,8 @@ export async function startJobWorkers(o: JobWorkersOptions): Promise<JobWorkers>
   const concurrency = o.concurrency ?? o.compute.threads;
   if (!Number.isSafeInteger(concurrency) || concurrency < 1) throw new RangeError(`concurrency must be a positive integer, got ${concurrency}`);
   const fill = { db: o.db, cells, compute: o.compute, workerName: o.workerName, logger: o.logger };
-  const probePool = o.probePool ?? createProbePool({ threads: o.compute.threads });
+  const ownProbePool = o.probePool ? null : createProbePool({ threads: o.compute.threads });
+  const probePool = o.probePool ?? ownProbePool!;
   const handlers: [QueueName, number, Handle][] = [
     [FILL_CELL_QUEUE, concurrency, (job) => fillCell(fill, job.data)],
     [THEORY_ROW_QUEUE, concurrency, (job) => computeTheoryRow(fill, job.data)],
@@ -83,5 +86,6 @@ export async function startJobWorkers(o: JobWorkersOptions): Promise<JobWorkers>
     async stop() {
       for (const queue of new Set(handlers.map((h) => h[0]))) await o.boss.offWork(queue);
     },
+    close: async () => ownProbePool?.close(),
   };
 }

@@ -35,6 +35,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await workers?.stop();
   await boss?.stop({ graceful: true, timeout: 5000 });
+  await workers?.close();
   await compute?.close();
   await database?.close();
   await testDb?.drop();
@@ -175,6 +176,7 @@ describe("fill-cell through the queue", () => {
   it("marks the cell and the map failed when a job used up its retries (dead letter)", async () => {
     const owner = await insertUser(database.db);
     await workers.stop();
+    await workers.close();
     const map = await createMap(database.db, boss, owner, { ...SMALL_RATE_MAP, seed: 11 });
     // A job of that map with no retries fails once (as a lost database connection would make
     // it): pg-boss moves its payload and last error to fill-cell-exhausted.

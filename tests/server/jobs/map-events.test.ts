@@ -37,6 +37,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await workers?.stop();
+  await workers?.close();
   await compute?.close();
   await app?.stop();
 });
