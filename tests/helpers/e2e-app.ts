@@ -7,6 +7,11 @@ import { createApp, type AppHandle } from "../../server/app";
 import { openDatabase } from "../../server/db/client";
 import { users } from "../../server/db/schema/index";
 import { seedDemoLab } from "../../server/db/seed/demo-lab";
+import { seedDemoMaps, type SeededMap } from "../../server/db/seed/demo-maps";
+import { mapFinishedMailHook } from "../../server/jobs/map-finished.job";
+import { createGroupsService } from "../../server/modules/groups/groups.service";
+import { bossMapJobs } from "../../server/modules/maps/maps.jobs";
+import { createMapsService } from "../../server/modules/maps/maps.service";
 import { createComputePool, type ComputePool } from "../../server/jobs/compute-pool";
 import { startJobWorkers, type JobWorkers } from "../../server/jobs/job-workers";
 import { logger } from "../../server/lib/logger";
@@ -35,18 +40,21 @@ export async function startE2eApp(options: { clientDir?: string; worker?: boolea
   const smtp = await startFakeSmtp({ port: 0, onMessage: (m) => insertOutboxMessage(database.db, m) });
   const mailer = createMailer({ host: "127.0.0.1", port: smtp.port, from: "Equilibrist <no-reply@equilibrist.test>" });
 
+  const server = http.createServer();
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+
   let boss: PgBoss | undefined;
   let compute: ComputePool | undefined;
   let workers: JobWorkers | undefined;
   if (options.worker) {
     boss = await createBoss(testDb.url, { max: 4, maintenanceIntervalSeconds: 5, applicationName: "equilibrist-e2e" });
     compute = createComputePool({ threads: 1 });
-    workers = await startJobWorkers({ db: database.db, boss, compute, workerName: "e2e-worker", logger, pollingIntervalSeconds: 0.5 });
+    workers = await startJobWorkers({
+      db: database.db, boss, compute, workerName: "e2e-worker", logger, pollingIntervalSeconds: 0.5,
+      onMapFinished: mapFinishedMailHook({ db: database.db, mailer, appUrl: baseUrl, logger }),
+    });
   }
-
-  const server = http.createServer();
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   const handle: AppHandle = createApp({
     database,
     mailer,
@@ -61,6 +69,13 @@ export async function startE2eApp(options: { clientDir?: string; worker?: boolea
     /** Inserts the demo lab of `npm start` (its people share the demo password). */
     async seedDemo(): Promise<void> {
       await seedDemoLab(database.db);
+    },
+    /** The demo lab's prepared maps, queued for the in-process worker (needs `worker: true`). */
+    async seedDemoMaps(): Promise<SeededMap[]> {
+      if (!boss) throw new Error("seedDemoMaps needs startE2eApp({ worker: true })");
+      await seedDemoLab(database.db);
+      const mapsService = createMapsService({ db: database.db, groups: createGroupsService({ db: database.db }), appUrl: baseUrl, jobs: bossMapJobs(boss) });
+      return seedDemoMaps(database.db, mapsService);
     },
     /** Gives an existing account the site role admin (the seed does this for the demo lab). */
     async makeAdmin(email: string): Promise<void> {
