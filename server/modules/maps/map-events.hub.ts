@@ -71,12 +71,18 @@ export class MapEventsHub {
       this.topics.set(mapId, topic);
     }
     topic.listeners.add(listener);
-    this.resync ??= setInterval(() => this.resyncAll(), this.deps.resyncMs ?? 5000).unref();
-    await this.ensureListening();
-    return () => {
+    const unsubscribe = () => {
       topic.listeners.delete(listener);
       if (topic.listeners.size === 0 && this.topics.get(mapId) === topic) this.topics.delete(mapId);
     };
+    this.resync ??= setInterval(() => this.resyncAll(), this.deps.resyncMs ?? 5000).unref();
+    try {
+      await this.ensureListening();
+    } catch (err) {
+      unsubscribe();
+      throw err;
+    }
+    return unsubscribe;
   }
 
   /** Current progress and status of a map, as a new subscriber's first events. */

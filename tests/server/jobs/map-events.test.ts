@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import express from "express";
 import http from "node:http";
 import type { AddressInfo } from "node:net";
@@ -6,6 +7,7 @@ import { apiPaths } from "../../../shared/schemas/api-paths";
 import { createComputePool, type ComputePool } from "../../../server/jobs/compute-pool";
 import { startJobWorkers, type JobWorkers } from "../../../server/jobs/job-workers";
 import { logger } from "../../../server/lib/logger";
+import { notifyMapEvent } from "../../../server/modules/cells/map-notify.repo";
 import { createMapEventsHub } from "../../../server/modules/maps/map-events.hub";
 import { createMapEventsRouter } from "../../../server/modules/maps/map-events.router";
 import { signedInPerson, startTestApp, type TestApp } from "../../helpers/test-app";
@@ -138,6 +140,33 @@ describe("map events router", () => {
     expect(hub.subscribers).toBe(0);
     server.closeAllConnections();
     await new Promise<void>((r) => server.close(() => r()));
+    await hub.close();
+  });
+
+  it("reconnects its LISTEN connection after the server drops it and keeps delivering", async () => {
+    const owner = await signedInPerson(app, "owner");
+    const created = await owner.client.post(apiPaths.maps.list, body(34));
+    const id = created.body.id as string;
+    const hub = createMapEventsHub({ db: app.database.db, pool: app.database.pool, logger, reconnectMs: 100, resyncMs: 600_000 });
+    const got: string[] = [];
+    const unsubscribe = await hub.subscribe(id, (e) => got.push(e.type === "status" ? `status:${e.data.status}` : e.type));
+    const listeners = sql`select pid from pg_stat_activity where application_name = 'equilibrist-map-events' and datname = current_database()`;
+    const before = (await app.database.db.execute<{ pid: number }>(listeners)).rows.map((r) => r.pid);
+    expect(before.length).toBeGreaterThanOrEqual(1);
+    await app.database.db.execute(sql`select pg_terminate_backend(pid) from pg_stat_activity where pid in ${before}`);
+    const until = Date.now() + 10_000;
+    for (;;) {
+      const now = (await app.database.db.execute<{ pid: number }>(listeners)).rows.map((r) => r.pid);
+      if (now.some((pid) => !before.includes(pid))) break;
+      if (Date.now() > until) throw new Error("the hub did not reconnect");
+      await new Promise((r) => setTimeout(r, 50));
+    }
+    expect((await owner.client.post(apiPaths.maps.cancel(id))).status).toBe(200);
+    await notifyMapEvent(app.database.db, { mapId: id, status: "cancelled" });
+    const deadline = Date.now() + 5000;
+    while (!got.includes("status:cancelled") && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
+    expect(got).toContain("status:cancelled");
+    unsubscribe();
     await hub.close();
   });
 });
