@@ -83,23 +83,45 @@ async function standard(pool: EnginePool): Promise<void> {
   }
 }
 
+const median = (v: number[]) => [...v].sort((a, b) => a - b)[v.length >> 1];
+
+/** The scipy reference and our runs on the same J and starts, alternated 3 times (medians). */
 async function compareScipy(pool: EnginePool): Promise<void> {
   const dir = mkdtempSync(join(tmpdir(), "eqb-bench-"));
-  const py = execFileSync("python3", ["scripts/reference/scipy_rk45_cell.py", "--n", "100", "--starts", "32", "--write", "--dir", dir], { encoding: "utf8" });
-  const ref = JSON.parse(py.trim().split("\n").pop()!);
+  const scipyRun = () => {
+    const out = execFileSync("python3", ["scripts/reference/scipy_rk45_cell.py", "--n", "100", "--starts", "32", "--write", "--dir", dir], { encoding: "utf8" });
+    return JSON.parse(out.trim().split("\n").pop()!);
+  };
+  let ref = scipyRun();
   const job = loadEquilibriaJob(["--couplings", join(dir, "J.npy"), "--starts", join(dir, "X0.npy"), "--mu", "1"], false);
   const net = rateNetworkFromMatrix(job.j, 1);
-  let t0 = performance.now();
-  const serial = runStarts(net, job.starts);
-  const ts = seconds(t0);
-  await runRateStartsParallel(pool, job.j, 1, 0, job.starts); // warm the workers' code
-  t0 = performance.now();
-  const par = await runRateStartsParallel(pool, job.j, 1, 0, job.starts);
-  const tp = seconds(t0);
-  console.log(`scipy ${ref.source}: ${fmt(ref.wallSeconds, 3)} s, ${ref.evaluations} evaluations, runs ${JSON.stringify(ref.runs)}, ${ref.distinct} distinct`);
+  await runRateStartsParallel(pool, job.j, 1, 0, job.starts); // warm the workers
+  const times = { scipy: [] as number[], serial: [] as number[], pool: [] as number[] };
+  const probeOff = { lyapunovAt: 0 };
+  let serial = runStarts(net, job.starts);
+  let par = serial;
+  const timesOff = { serial: [] as number[], pool: [] as number[] };
+  for (let rep = 0; rep < 3; rep++) {
+    ref = scipyRun();
+    times.scipy.push(ref.wallSeconds);
+    for (const [opts, into] of [[{}, times], [probeOff, timesOff]] as const) {
+      let t0 = performance.now();
+      serial = runStarts(net, job.starts, opts);
+      into.serial.push(seconds(t0));
+      t0 = performance.now();
+      par = await runRateStartsParallel(pool, job.j, 1, 0, job.starts, opts);
+      into.pool.push(seconds(t0));
+    }
+  }
+  const s = median(times.scipy);
   const rep = (r: typeof serial) => JSON.stringify(reportOf(r, 0).runs);
-  console.log(`ours serial: ${fmt(ts, 3)} s (${fmt(ref.wallSeconds / ts)}× faster), runs ${rep(serial)}, ${serial.equilibria.size} distinct`);
-  console.log(`ours on ${pool.threads} threads: ${fmt(tp, 3)} s (${fmt(ref.wallSeconds / tp)}× faster), runs ${rep(par)}, ${par.equilibria.size} distinct`);
+  console.log(`median of 3 alternated runs (N = 100, 32 starts, rtol 1e-6, atol 1e-9, t ≤ 200, still at 1e-5):`);
+  console.log(`scipy (${ref.source}): ${fmt(s, 3)} s, ${ref.evaluations} evaluations, runs ${JSON.stringify(ref.runs)}, ${ref.distinct} distinct`);
+  for (const [label, t] of [["with Lyapunov probes", times], ["without probes (scipy's work)", timesOff]] as const) {
+    const [a, b] = [median(t.serial), median(t.pool)];
+    console.log(`ours ${label}: serial ${fmt(a, 3)} s (${fmt(s / a)}× scipy), ${pool.threads} threads ${fmt(b, 3)} s (${fmt(s / b)}× scipy)`);
+  }
+  console.log(`ours: ${serial.counters.evaluations} evaluations, runs ${rep(serial)} (${rep(par)} on the pool), ${serial.equilibria.size} distinct`);
 }
 
 function compareMethods(): void {

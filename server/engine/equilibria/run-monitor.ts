@@ -95,7 +95,7 @@ export class RunMonitor {
     this.probed = true;
     const est = estimateLyapunov(this.probeSystem, x, {
       duration: this.settings.lyapunovDuration,
-      interval: 1 / this.network.mu,
+      interval: 2 / this.network.mu,
       rtol: this.settings.rtol,
       atol: this.settings.atol,
     });

@@ -76,8 +76,9 @@ export async function runCellParallel(pool: EnginePool, input: CellInput): Promi
 
 /**
  * Runs the starts of one rate network dx/dt = −μx + J tanh(x) + I over the pool's threads:
- * the starts are cut into `threads` contiguous shares, each run by runStarts in a worker (the
- * basin shortcut then only knows the equilibria of its own share), and joined in share order
+ * start i goes to share i mod threads (interleaved, so slow and fast runs spread evenly), each
+ * share is run by runStarts in a worker (the basin shortcut then only knows the equilibria of
+ * its own share), and the shares are joined in share order
  * (joinRateShares). The result depends on the number of threads, and is deterministic for a
  * given number.
  * @param pool an engine pool
@@ -97,10 +98,10 @@ export async function runRateStartsParallel(
   options: RunStartsOptions = {},
 ): Promise<NetworkRun> {
   const shares = Math.max(1, Math.min(pool.threads, starts.length));
-  const size = Math.ceil(starts.length / shares);
-  const tasks: RateStartsTask[] = Array.from({ length: shares }, (_, s) => ({
-    couplings, mu, input, starts: starts.slice(s * size, (s + 1) * size), offset: s * size, options,
-  }));
+  const tasks: RateStartsTask[] = Array.from({ length: shares }, (_, s) => {
+    const indices = starts.map((_x, i) => i).filter((i) => i % shares === s);
+    return { couplings, mu, input, starts: indices.map((i) => starts[i]), indices, options };
+  });
   const results = await Promise.all(tasks.map((t) => pool.runStarts(t)));
   return joinRateShares(tasks[0], results);
 }

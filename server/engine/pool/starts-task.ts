@@ -9,8 +9,8 @@ export interface RateStartsTask {
   mu: number;
   input: Float64Array | number;
   starts: Float64Array[];
-  /** Index of the first start of this share within the whole list. */
-  offset: number;
+  /** Index of each start of this share within the whole list. */
+  indices: number[];
   options: RunStartsOptions;
 }
 
@@ -31,15 +31,15 @@ export function runRateStarts(task: RateStartsTask): RateStartsShare {
     points: run.equilibria.items.map((e) => e.x),
     residuals: run.equilibria.items.map((e) => e.residual),
     hits: [...run.equilibria.hits],
-    outcomes: run.outcomes.map((o) => ({ ...o, start: o.start + task.offset })),
+    outcomes: run.outcomes.map((o) => ({ ...o, start: task.indices[o.start] })),
     counters: run.counters,
   };
 }
 
 /**
  * Joins the shares of one network's starts, in share order: equilibria are merged by the same
- * relative distance as within a share (first occurrence kept, hits added), outcome indices
- * remapped, spectra recomputed once per distinct equilibrium on the calling side.
+ * relative distance as within a share (first occurrence kept, hits added), outcomes put back in
+ * start order, spectra recomputed once per distinct equilibrium on the calling side.
  * @param task any task of the network (for J, μ, input and mergeTol)
  * @param shares the shares in start order
  * @returns the combined NetworkRun (no traces)
@@ -56,7 +56,7 @@ export function joinRateShares(task: RateStartsTask, shares: RateStartsShare[]):
       set.hits[j] += share.hits[i];
       return j;
     });
-    for (const o of share.outcomes) outcomes.push({ ...o, equilibrium: o.equilibrium < 0 ? -1 : map[o.equilibrium] });
+    for (const o of share.outcomes) outcomes[o.start] = { ...o, equilibrium: o.equilibrium < 0 ? -1 : map[o.equilibrium] };
     for (const key of Object.keys(counters) as (keyof typeof counters)[]) counters[key] += share.counters[key];
   }
   return { equilibria: set, outcomes, counters, traces: [] };

@@ -3,7 +3,10 @@ import { runCell } from "../../../../server/engine/cell/run-cell";
 import { drawStart, runNetwork } from "../../../../server/engine/cell/run-network";
 import { mergeNetworks } from "../../../../server/engine/cell/merge";
 import { validateCellInput } from "../../../../server/engine/cell/cell-input";
-import { createEnginePool, runCellParallel } from "../../../../server/engine/pool/engine-pool";
+import { createEnginePool, runCellParallel, runRateStartsParallel } from "../../../../server/engine/pool/engine-pool";
+import { runStarts } from "../../../../server/engine/equilibria/run-starts";
+import { getEnsemble } from "../../../../server/engine/ensembles/registry";
+import type { RateNetwork } from "../../../../server/engine/ensembles/rate/rate-network";
 import { cellResultSchema, type CellInput, type CellResult } from "../../../../shared/schemas/cell-result";
 
 const input: CellInput = {
@@ -88,6 +91,20 @@ describe("exhaustive cells and the pool", () => {
     const parallel = await runCellParallel(pool, input);
     expect(parallel.timing.threads).toBe(2);
     expect(withoutTiming(parallel)).toBe(withoutTiming(serial));
+  });
+
+  it("splits one rate network's starts over the threads and joins them in start order", async () => {
+    const rate = getEnsemble("rate");
+    const params = { N: 16, g: 2.2 };
+    const net = rate.build(params, rate.draw(params, 3, 0), 1, 0.7) as RateNetwork;
+    const starts = Array.from({ length: 8 }, (_, s) => drawStart(input, 16, 0, s, net.stateScale));
+    const serial = runStarts(net, starts);
+    const joined = await runRateStartsParallel(pool, net.couplings, 1, 0, starts);
+    expect(joined.outcomes.map((o) => o.start)).toEqual([0, 1, 2, 3, 4, 5, 6, 7]);
+    expect(joined.equilibria.hits.reduce((a, b) => a + b, 0)).toBe(joined.outcomes.filter((o) => o.class === "settled").length);
+    // The basin shortcut differs between shares, not the equilibria reached:
+    const key = (r: typeof serial) => r.equilibria.items.filter((e) => e.stable).map((e) => e.normRms.toFixed(8)).sort();
+    expect(key(joined)).toEqual(key(serial));
   });
 
   it("adds exhaustive totals that contain every stable equilibrium the runs reached", () => {
