@@ -15,6 +15,14 @@ deps_npm() {
   fi
 }
 
+# pdftotext (Debian's poppler-utils): the review browser test reads the printed report's PDF.
+deps_pdftotext() {
+  if ! command -v pdftotext >/dev/null; then
+    echo "[equilibrist] installing Debian's poppler-utils (pdftotext)…"
+    apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq poppler-utils >/dev/null
+  fi
+}
+
 deps_chromium() {
   if [ ! -x /usr/bin/chromium ]; then
     echo "[equilibrist] installing Debian's chromium…"

@@ -14,6 +14,7 @@ export NODE_ENV=test
 
 deps_npm
 deps_chromium
+deps_pdftotext
 PGT=".data/pg-test-$PG_TEST_PORT"
 pg_down "$ROOT/$PGT" || true
 rm -rf "$PGT" "$PGT-sock"
