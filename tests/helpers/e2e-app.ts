@@ -2,10 +2,10 @@ import { existsSync } from "node:fs";
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import path from "node:path";
-import { eq } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import { createApp, type AppHandle } from "../../server/app";
 import { openDatabase } from "../../server/db/client";
-import { users } from "../../server/db/schema/index";
+import { outbox, users } from "../../server/db/schema/index";
 import { seedDemoLab } from "../../server/db/seed/demo-lab";
 import { seedDemoMaps, type SeededMap } from "../../server/db/seed/demo-maps";
 import { mapFinishedMailHook } from "../../server/jobs/map-finished.job";
@@ -76,6 +76,11 @@ export async function startE2eApp(options: { clientDir?: string; worker?: boolea
       await seedDemoLab(database.db);
       const mapsService = createMapsService({ db: database.db, groups: createGroupsService({ db: database.db }), appUrl: baseUrl, jobs: bossMapJobs(boss) });
       return seedDemoMaps(database.db, mapsService);
+    },
+    /** Newest outbox message sent to `to` (undefined when none). */
+    async lastMailTo(to: string) {
+      const [row] = await database.db.select().from(outbox).where(eq(outbox.to, to)).orderBy(desc(outbox.createdAt)).limit(1);
+      return row;
     },
     /** Gives an existing account the site role admin (the seed does this for the demo lab). */
     async makeAdmin(email: string): Promise<void> {

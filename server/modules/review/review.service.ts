@@ -58,7 +58,8 @@ export class ReviewService {
     const { record, actor: me } = await this.deps.maps.getWritable(actor, id, token);
     const seed = body.seed ?? freshSeed(record.seed);
     const manifest = manifestOf(record);
-    const group = manifest.visibility === "group" && manifest.groupId ? { visibility: "group" as const, groupId: manifest.groupId } : { visibility: "private" as const, groupId: null };
+    // The group keeps reading the replicate; a read-only link is not copied (share it anew).
+    const group = manifest.visibility !== "private" && manifest.groupId ? { visibility: "group" as const, groupId: manifest.groupId } : { visibility: "private" as const, groupId: null };
     const title = body.title ?? `${record.title} · replicate, seed ${seed}`.slice(0, MAX_TITLE);
     const next = createMapSchema.parse({ ...manifest, ...group, title, seed, estimateOnly: undefined });
     return this.deps.maps.create(me, next, { replicateOf: record.id });
