@@ -26,6 +26,24 @@ function settleHistogram(outputs: NetworkOutput[], tMax: number): CellResult["ag
   return { edges, counts };
 }
 
+/** The cell aggregates of networks sorted by k (see mergeNetworks). */
+function aggregateOf(input: CellInput, sorted: NetworkOutput[]): CellResult["aggregate"] {
+  const nets = sorted.map((o) => o.summary);
+  const runs = emptyRunCounts();
+  for (const s of nets) for (const c of RUN_CLASSES) runs[c] += s.runs[c];
+  const exhaustive = nets.every((s) => s.exhaustive !== null) ? nets.map((s) => s.exhaustive!.total) : null;
+  return {
+    meanStable: json(meanInterval(nets.map((s) => s.stable.length))),
+    meanChao1: json(meanInterval(nets.map((s) => s.chao1.estimate))),
+    convergedShare: json(wilsonInterval(runs.settled, nets.length * input.budget.starts)),
+    oneStableShare: json(wilsonInterval(nets.filter((s) => s.stable.length === 1).length, nets.length)),
+    meanUnstableReached: json(meanInterval(nets.map((s) => s.unstable.length))),
+    meanTotal: exhaustive ? json(meanInterval(exhaustive)) : null,
+    runs,
+    settleHistogram: settleHistogram(sorted, input.budget.tMax),
+  };
+}
+
 /**
  * Aggregates the networks of one cell into its CellResult: mean distinct stable equilibria per
  * network and mean Chao1 with 95 % Student-t intervals, share of converged runs and share of
@@ -44,11 +62,6 @@ export function mergeNetworks(input: CellInput, outputs: NetworkOutput[], timing
   if (sorted.length !== K || sorted.some((o, i) => o.summary.k !== i)) {
     throw new RangeError(`outputs must hold networks 0 … ${K - 1} exactly once, got ${outputs.length} outputs`);
   }
-  const nets = sorted.map((o) => o.summary);
-  const runs = emptyRunCounts();
-  for (const s of nets) for (const c of RUN_CLASSES) runs[c] += s.runs[c];
-  const totalRuns = K * input.budget.starts;
-  const exhaustive = nets.every((s) => s.exhaustive !== null) ? nets.map((s) => s.exhaustive!.total) : null;
   const ensemble = getEnsemble(input.ensemble);
   const display = sorted[0].display;
   return {
@@ -61,17 +74,8 @@ export function mergeNetworks(input: CellInput, outputs: NetworkOutput[], timing
     tau: input.tau,
     seed: input.seed,
     budget: input.budget,
-    networks: nets,
-    aggregate: {
-      meanStable: json(meanInterval(nets.map((s) => s.stable.length))),
-      meanChao1: json(meanInterval(nets.map((s) => s.chao1.estimate))),
-      convergedShare: json(wilsonInterval(runs.settled, totalRuns)),
-      oneStableShare: json(wilsonInterval(nets.filter((s) => s.stable.length === 1).length, K)),
-      meanUnstableReached: json(meanInterval(nets.map((s) => s.unstable.length))),
-      meanTotal: exhaustive ? json(meanInterval(exhaustive)) : null,
-      runs,
-      settleHistogram: settleHistogram(sorted, input.budget.tMax),
-    },
+    networks: sorted.map((o) => o.summary),
+    aggregate: aggregateOf(input, sorted),
     traces: display?.traces ?? [],
     spectrum: display?.spectrum ?? null,
     counters: sumCounters(sorted),
