@@ -22,6 +22,8 @@ import { MapViewPage, mapViewLoader } from "./routes/maps/map-view";
 import { NewMapPage, newMapLoader } from "./routes/maps/new-map";
 import { SharedCellPage, sharedCellLoader, SharedLayout, SharedMapPage, sharedMapLoader } from "./routes/maps/shared-map";
 import { NotFoundPage } from "./routes/not-found";
+import { ProbeDetailPage, probeDetailLoader } from "./routes/probes/probe-detail";
+import { ProbesListPage, probesListLoader } from "./routes/probes/probes-list";
 import { AccountPage, accountLoader } from "./routes/account/account";
 import { ComparePage, compareLoader } from "./routes/review/compare";
 import { ImportMapPage } from "./routes/review/import-map";
@@ -75,6 +77,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                 { path: "maps/import", element: <ImportMapPage /> },
                 { path: "maps/:mapId/compare/:otherId", loader: compareLoader(queryClient), element: <ComparePage /> },
                 { path: "account", loader: accountLoader(queryClient), element: <AccountPage /> },
+                { path: "probes", loader: probesListLoader(queryClient), element: <ProbesListPage /> },
+                { path: "probes/:probeId", loader: probeDetailLoader(queryClient), element: <ProbeDetailPage /> },
                 { path: "groups", loader: groupsListLoader(queryClient), element: <GroupsListPage /> },
                 { path: "groups/:groupId", loader: groupDetailLoader(queryClient), element: <GroupDetailPage /> },
                 {

@@ -10,6 +10,7 @@ type NavItem = { to: string; label: string; end?: boolean; section?: string };
 function navItems(user: User): NavItem[] {
   const items: NavItem[] = [
     { to: "/", label: "Maps", end: true, section: "/maps/" },
+    { to: "/probes", label: "Probe" },
     { to: "/groups", label: "Groups" },
   ];
   if (user.siteRole === "admin") items.push({ to: "/admin", label: "Admin" });
