@@ -10,6 +10,8 @@ import { sendInTransaction, sendMany, transactionDb } from "../../queue/send";
 /** Jobs one map operation enqueues, all inside the caller's transaction. */
 export interface MapJobBatch {
   fillCells: FillCellPayload[];
+  /** Estimated CPU seconds of each fill-cell (same order), to size its expiry. */
+  fillCellSeconds?: number[];
   theoryRows: TheoryRowPayload[];
   /** Enqueued when the map is done at once (every cell cached). */
   mapFinished?: MapFinishedPayload;
@@ -26,6 +28,15 @@ export interface MapJobs {
   cancelFillCells(tx: Tx, jobIds: string[]): Promise<void>;
 }
 
+/**
+ * A fill-cell job may stay active three times its estimated cost, and at least the queue's
+ * default (30 min), so a big cell is not timed out and retried while it is still computing; a
+ * dead worker's job is still retried once that time has passed.
+ */
+export function fillCellExpiry(estimatedSeconds: number | undefined): number {
+  return Math.max(30 * 60, Math.ceil(3 * (estimatedSeconds ?? 0)));
+}
+
 /** Largest number of ids pg-boss is asked to cancel in one statement. */
 const CANCEL_CHUNK = 1000;
 
@@ -33,7 +44,10 @@ const CANCEL_CHUNK = 1000;
 export function bossMapJobs(boss: PgBoss): MapJobs {
   return {
     async enqueue(tx, jobs) {
-      const fillCellIds = await sendMany(boss, tx, FILL_CELL_QUEUE, jobs.fillCells);
+      const seconds = jobs.fillCellSeconds;
+      const fillCellIds = await sendMany(boss, tx, FILL_CELL_QUEUE, jobs.fillCells, {
+        expireInSeconds: (_payload, k) => fillCellExpiry(seconds?.[k]),
+      });
       await sendMany(boss, tx, THEORY_ROW_QUEUE, jobs.theoryRows);
       if (jobs.mapFinished) await sendInTransaction(boss, tx, MAP_FINISHED_QUEUE, jobs.mapFinished);
       return { fillCellIds };

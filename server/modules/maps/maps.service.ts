@@ -8,6 +8,7 @@ import { requireActor, type Actor } from "../../lib/actor";
 import { ConflictError, ForbiddenError, InvalidError, NotFoundError, UnauthenticatedError } from "../../lib/errors";
 import type { GroupsService } from "../groups/groups.service";
 import type { MapSpec } from "./cell-key";
+import { notifyMapEvent } from "../cells/map-notify.repo";
 import * as cellsRepo from "./map-cells.repo";
 import { accessOf, canWrite, type MapAccess } from "./maps.access";
 import { estimateSeconds } from "./maps.estimate";
@@ -116,6 +117,7 @@ export class MapsService {
     const theoryRows = [...new Map(plan.theoryRows.filter((t) => !storedRows.has(t.theoryKey)).map((t) => [t.theoryKey, t])).values()];
     const { fillCellIds } = await this.deps.jobs.enqueue(tx, {
       fillCells: missing.map((c) => ({ mapId: map.id, i: c.i, j: c.j, cellKey: c.cellKey })),
+      fillCellSeconds: missing.map((c) => estimateSeconds(specOf(body), [c])),
       theoryRows,
       mapFinished: allCached ? { mapId: map.id } : undefined,
     });
@@ -179,6 +181,7 @@ export class MapsService {
       const jobIds = await cellsRepo.cancelPending(tx, id);
       await this.deps.jobs.cancelFillCells(tx, jobIds);
       await repo.updateMap(tx, id, { status: "cancelled", finishedAt: new Date() });
+      await notifyMapEvent(tx, { mapId: id, status: "cancelled" });
     });
     return this.get(me, id);
   }
