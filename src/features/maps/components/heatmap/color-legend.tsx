@@ -6,6 +6,8 @@ import { wrapText } from "../../lib/wrap-text";
 import { FONT } from "./figure-axes";
 
 export interface LegendExtras {
+  /** Some cell has a value in this layer (else the key says so instead of showing a bare bar). */
+  values: boolean;
   pending: boolean;
   empty: boolean;
   failed: boolean;
@@ -82,7 +84,11 @@ export function ColorLegend(p: { scale: LayerScale; width: number; extras: Legen
         </text>
       ))}
       <g transform={`translate(0,${afterUnit})`}>
-        {scale.kind === "continuous" ? (
+        {!p.extras.values ? (
+          <text y={12} fontSize={11} fontFamily={FONT} fill={SPECIAL_FILLS.inkSoft}>
+            No cell has a value in this layer yet.
+          </text>
+        ) : scale.kind === "continuous" ? (
           <ContinuousBar scale={scale} width={width} gradientId={p.gradientId} />
         ) : (
           scale.entries.map((e, k) => (
@@ -105,7 +111,7 @@ export function ColorLegend(p: { scale: LayerScale; width: number; extras: Legen
         ]
           .filter((s): s is { fill: string; label: string } => Boolean(s))
           .map((s, k) => (
-            <Swatch key={s.label} x={k * 150} fill={s.fill} label={s.label} />
+            <Swatch key={s.label} x={k * Math.min(150, width / 3)} fill={s.fill} label={s.label} />
           ))}
       </g>
     </g>

@@ -1,20 +1,15 @@
-import { memo, useCallback, useId, useMemo, useRef, useState, type PointerEvent, type Ref } from "react";
+import { memo, type Ref } from "react";
 import type { LayerId } from "../../../../../shared/maps/layers";
 import type { MapView } from "../../../../../shared/schemas/maps";
-import { slotOf, useGridFocus } from "../../hooks/use-grid-focus";
-import { cellPaints } from "../../lib/cell-paints";
-import { layerScale } from "../../lib/color-scale";
+import { useFigureModel } from "../../hooks/use-figure-model";
 import type { Criterion } from "../../lib/filters";
-import { layerValues, stateCounts, type GridModel } from "../../lib/grid-model";
-import { overlayCurves, type CurveId } from "../../lib/overlay-curves";
+import type { GridModel } from "../../lib/grid-model";
+import type { CurveId } from "../../lib/overlay-curves";
 import { SPECIAL_FILLS } from "../../lib/palettes";
-import { axisScale, band } from "../../lib/plot-geometry";
-import { settingsLine } from "../../lib/map-settings";
+import { CellLayer } from "./cell-layer";
 import { ColorLegend } from "./color-legend";
 import { CurveLayer } from "./curve-layer";
 import { FigureAxes, FONT } from "./figure-axes";
-import { figureLayout } from "./figure-layout";
-import { HeatCells } from "./heat-cells";
 
 export interface MapFigureProps {
   map: MapView;
@@ -51,39 +46,7 @@ function Patterns({ pending, failed }: { pending: string; failed: string }) {
  * data-export="skip".
  */
 export const MapFigure = memo(function MapFigure({ map, grid, layerId, criteria, curves, width, onOpen, onHover, svgRef }: MapFigureProps) {
-  const uid = useId().replace(/[^a-zA-Z0-9]/g, "");
-  const ids = useMemo(() => ({ pending: `hatch${uid}`, failed: `fail${uid}`, clip: `clip${uid}`, gradient: `grad${uid}` }), [uid]);
-  const values = useMemo(() => layerValues(grid, layerId), [grid, layerId]);
-  const scale = useMemo(() => layerScale(layerId, values), [layerId, values]);
-  const paints = useMemo(() => cellPaints(grid, layerId, values, scale, criteria, ids), [grid, layerId, values, scale, criteria, ids]);
-  const settings = useMemo(() => settingsLine(map), [map]);
-  const counts = stateCounts(grid);
-  const subtitle = [`${scale.layer.label} over relaxation rate μ and asymmetry τ`, `${counts.done} of ${grid.cells.length} cells done`];
-  const L = figureLayout(width, { mu: grid.muSteps, tau: grid.tauSteps }, map.muCritical != null, scale, { settings, subtitle });
-  const x = useMemo(() => axisScale(map.mu, [0, L.plotWidth]), [map.mu, L.plotWidth]);
-  const y = useMemo(() => axisScale(map.tau, [L.plotHeight, 0]), [map.tau, L.plotHeight]);
-  const curveList = useMemo(() => overlayCurves(map, y.domain() as [number, number]), [map, y]);
-  const extras = { pending: counts.pending > 0, failed: counts.failed > 0, empty: Array.from(values).some((v, k) => Number.isNaN(v) && grid.cells[k]?.state === "done") || counts.cancelled > 0 };
-
-  const cellsRef = useRef<SVGGElement>(null);
-  const open = useCallback((k: number) => onOpen?.(k % grid.muSteps, Math.floor(k / grid.muSteps)), [onOpen, grid.muSteps]);
-  const focus = useGridFocus(cellsRef, grid.muSteps, grid.tauSteps, onOpen ? open : undefined);
-  const [hover, setHover] = useState<number | null>(null);
-  const interactive = Boolean(onOpen);
-  const ring = hover ?? (focus.focused ? focus.active : null);
-  const ringBox = ring === null ? null : { x: band(ring % grid.muSteps, grid.muSteps, [0, L.plotWidth]), y: band(Math.floor(ring / grid.muSteps), grid.tauSteps, [L.plotHeight, 0]) };
-
-  const pointer = (e: PointerEvent) => {
-    const k = slotOf(e.target);
-    if (k === hover) return;
-    setHover(k);
-    onHover?.(k);
-  };
-  const leave = () => {
-    setHover(null);
-    onHover?.(focus.focused ? focus.active : null);
-  };
-
+  const { ids, scale, paints, layout: L, x, y, curves: curveList, extras } = useFigureModel(map, grid, layerId, criteria, width);
   return (
     <svg ref={svgRef} xmlns="http://www.w3.org/2000/svg" width={L.width} height={L.height} viewBox={`0 0 ${L.width} ${L.height}`} fontFamily={FONT} role="figure" aria-label={`${map.title}: heatmap of ${scale.layer.label}`}>
       <Patterns pending={ids.pending} failed={ids.failed} />
@@ -100,25 +63,8 @@ export const MapFigure = memo(function MapFigure({ map, grid, layerId, criteria,
         <clipPath id={ids.clip}>
           <rect width={L.plotWidth} height={L.plotHeight} />
         </clipPath>
-        <g
-          ref={cellsRef}
-          className={interactive ? "cursor-pointer [&_rect]:outline-none" : undefined}
-          shapeRendering="crispEdges"
-          role={interactive ? "group" : undefined}
-          aria-label={interactive ? "Cells: arrow keys move, Enter opens the cell" : undefined}
-          onKeyDown={interactive ? focus.onKeyDown : undefined}
-          onFocus={interactive ? (e) => { focus.onFocus(e); onHover?.(slotOf(e.target)); } : undefined}
-          onBlur={interactive ? focus.onBlur : undefined}
-          onClick={interactive ? (e) => { const k = slotOf(e.target); if (k !== null) open(k); } : undefined}
-          onPointerMove={onHover ? pointer : undefined}
-          onPointerLeave={onHover ? leave : undefined}
-        >
-          <HeatCells muSteps={grid.muSteps} tauSteps={grid.tauSteps} width={L.plotWidth} height={L.plotHeight} paints={paints} active={interactive ? focus.active : -1} />
-        </g>
+        <CellLayer muSteps={grid.muSteps} tauSteps={grid.tauSteps} width={L.plotWidth} height={L.plotHeight} paints={paints} onOpen={onOpen} onHover={onHover} />
         <CurveLayer curves={curveList} shown={curves} x={x} y={y} clipId={ids.clip} />
-        {ringBox && (
-          <rect data-export="skip" pointerEvents="none" x={ringBox.x.start} y={ringBox.y.start} width={ringBox.x.size} height={ringBox.y.size} fill="none" stroke={SPECIAL_FILLS.ink} strokeWidth={2} />
-        )}
         <FigureAxes x={x} y={y} mus={grid.mus} taus={grid.taus} plotWidth={L.plotWidth} plotHeight={L.plotHeight} muCritical={map.muCritical} muLog={map.mu.scale === "log"} />
       </g>
       <g transform={`translate(${L.left},${L.legendTop})`}>
