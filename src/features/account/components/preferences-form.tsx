@@ -9,7 +9,7 @@ interface PreferencesFormProps {
 /** The account's switches; each saves as soon as it changes. */
 export function PreferencesForm({ preferences, busy, onChange }: PreferencesFormProps) {
   return (
-    <fieldset disabled={busy} className="flex flex-col gap-3">
+    <fieldset aria-busy={busy || undefined} className="flex flex-col gap-3">
       <legend className="sr-only">E-mail</legend>
       <label className="flex cursor-pointer items-start gap-3">
         <input
