@@ -22,6 +22,11 @@ import { loadEquilibriaJob, reportOf } from "../server/engine/cli/equilibria-com
 import type { CellInput } from "../shared/schemas/cell-result";
 
 const seconds = (t0: number) => (performance.now() - t0) / 1000;
+/** CPU seconds of this process (all its threads) since c0: immune to other processes' load. */
+const cpuSince = (c0: NodeJS.CpuUsage) => {
+  const c = process.cpuUsage(c0);
+  return (c.user + c.system) / 1e6;
+};
 const fmt = (v: number, d = 2) => v.toFixed(d);
 
 /** RHS-only throughput of the batched system (8 states per call), in GFLOP/s. */
@@ -41,13 +46,16 @@ function rhsGflops(network: Network): number {
 }
 
 function runFigures(label: string, network: Network, starts: Float64Array[], options: RunStartsOptions = {}): void {
+  runStarts(network, starts.slice(0, 4), { ...options, tMax: 20 }); // warm-up (JIT, SIMD tier-up)
   const t0 = performance.now();
+  const c0 = process.cpuUsage();
   const run = runStarts(network, starts, options);
   const t = seconds(t0);
+  const cpu = cpuSince(c0);
   const evals = run.counters.evaluations + run.counters.probeEvaluations * 2;
   const classes = Object.entries(run.outcomes.reduce<Record<string, number>>((a, o) => ((a[o.class] = (a[o.class] ?? 0) + 1), a), {}));
   console.log(
-    `${label}: ${starts.length} runs in ${fmt(t, 3)} s → ${fmt(starts.length / t, 1)} trajectories/s, ` +
+    `${label}: ${starts.length} runs in ${fmt(t, 3)} s (CPU ${fmt(cpu, 3)} s) → ${fmt(starts.length / t, 1)} trajectories/s, ` +
       `${fmt(evals / t / 1e3, 1)}k RHS/s, ${fmt((evals * network.rhsFlops) / t / 1e9)} GFLOP/s in integration ` +
       `(RHS alone ${fmt(rhsGflops(network))} GFLOP/s); ${run.equilibria.size} equilibria; ${classes.map(([k, v]) => `${k} ${v}`).join(", ")}`,
   );
@@ -55,13 +63,18 @@ function runFigures(label: string, network: Network, starts: Float64Array[], opt
 
 async function cellFigures(pool: EnginePool, input: CellInput): Promise<void> {
   const t0 = performance.now();
+  let c0 = process.cpuUsage();
   const serial = runCell(input);
   const ts = seconds(t0);
+  const cs = cpuSince(c0);
+  c0 = process.cpuUsage();
   const parallel = await runCellParallel(pool, input);
+  const cp = cpuSince(c0);
   const same = JSON.stringify({ ...serial, timing: null }) === JSON.stringify({ ...parallel, timing: null });
   console.log(
     `  cell ${input.budget.networks} networks × ${input.budget.starts} starts: serial ${fmt(ts, 3)} s, ` +
-      `pool of ${pool.threads} ${fmt(parallel.timing.wallSeconds, 3)} s (×${fmt(ts / parallel.timing.wallSeconds)}), identical: ${same}`,
+      `pool of ${pool.threads} ${fmt(parallel.timing.wallSeconds, 3)} s (×${fmt(ts / parallel.timing.wallSeconds)}), identical: ${same}; ` +
+      `CPU serial ${fmt(cs, 3)} s, pool ${fmt(cp, 3)} s in all threads`,
   );
 }
 
@@ -96,18 +109,21 @@ async function compareScipy(pool: EnginePool): Promise<void> {
   const job = loadEquilibriaJob(["--couplings", join(dir, "J.npy"), "--starts", join(dir, "X0.npy"), "--mu", "1"], false);
   const net = rateNetworkFromMatrix(job.j, 1);
   await runRateStartsParallel(pool, job.j, 1, 0, job.starts); // warm the workers
-  const times = { scipy: [] as number[], serial: [] as number[], pool: [] as number[] };
+  const times = { scipy: [] as number[], scipyCpu: [] as number[], serial: [] as number[], pool: [] as number[], serialCpu: [] as number[] };
   const probeOff = { lyapunovAt: 0 };
   let serial = runStarts(net, job.starts);
   let par = serial;
-  const timesOff = { serial: [] as number[], pool: [] as number[] };
+  const timesOff = { serial: [] as number[], pool: [] as number[], serialCpu: [] as number[] };
   for (let rep = 0; rep < 3; rep++) {
     ref = scipyRun();
     times.scipy.push(ref.wallSeconds);
+    times.scipyCpu.push(ref.cpuSeconds);
     for (const [opts, into] of [[{}, times], [probeOff, timesOff]] as const) {
       let t0 = performance.now();
+      const c0 = process.cpuUsage();
       serial = runStarts(net, job.starts, opts);
       into.serial.push(seconds(t0));
+      into.serialCpu.push(cpuSince(c0));
       t0 = performance.now();
       par = await runRateStartsParallel(pool, job.j, 1, 0, job.starts, opts);
       into.pool.push(seconds(t0));
@@ -116,10 +132,14 @@ async function compareScipy(pool: EnginePool): Promise<void> {
   const s = median(times.scipy);
   const rep = (r: typeof serial) => JSON.stringify(reportOf(r, 0).runs);
   console.log(`median of 3 alternated runs (N = 100, 32 starts, rtol 1e-6, atol 1e-9, t ≤ 200, still at 1e-5):`);
-  console.log(`scipy (${ref.source}): ${fmt(s, 3)} s, ${ref.evaluations} evaluations, runs ${JSON.stringify(ref.runs)}, ${ref.distinct} distinct`);
+  const sc = median(times.scipyCpu);
+  console.log(`scipy (${ref.source}): ${fmt(s, 3)} s (CPU ${fmt(sc, 3)} s), ${ref.evaluations} evaluations, runs ${JSON.stringify(ref.runs)}, ${ref.distinct} distinct`);
   for (const [label, t] of [["with Lyapunov probes", times], ["without probes (scipy's work)", timesOff]] as const) {
-    const [a, b] = [median(t.serial), median(t.pool)];
-    console.log(`ours ${label}: serial ${fmt(a, 3)} s (${fmt(s / a)}× scipy), ${pool.threads} threads ${fmt(b, 3)} s (${fmt(s / b)}× scipy)`);
+    const [a, b, ac] = [median(t.serial), median(t.pool), median(t.serialCpu)];
+    console.log(
+      `ours ${label}: serial ${fmt(a, 3)} s (${fmt(s / a)}× scipy), ${pool.threads} threads ${fmt(b, 3)} s (${fmt(s / b)}× scipy); ` +
+        `CPU serial ${fmt(ac, 3)} s (${fmt(sc / ac)}× scipy's CPU; ideal on ${pool.threads} cores ${fmt((pool.threads * sc) / ac)}×)`,
+    );
   }
   console.log(`ours: ${serial.counters.evaluations} evaluations, runs ${rep(serial)} (${rep(par)} on the pool), ${serial.equilibria.size} distinct`);
 }
