@@ -46,7 +46,7 @@ function rhsGflops(network: Network): number {
 }
 
 function runFigures(label: string, network: Network, starts: Float64Array[], options: RunStartsOptions = {}): void {
-  runStarts(network, starts.slice(0, 4), { ...options, tMax: 20 }); // warm-up (JIT, SIMD tier-up)
+  runStarts(network, starts.slice(0, 8), options); // warm-up (JIT, SIMD tier-up)
   const t0 = performance.now();
   const c0 = process.cpuUsage();
   const run = runStarts(network, starts, options);
