@@ -79,8 +79,8 @@ async function rateMapViews(page: Page, base: string, take: Take, id: string): P
   await take(page, "map-cell-rate");
 }
 
-/** Takes every map screen; returns the read-only link it created. */
-export async function mapPages(page: Page, base: string, take: Take, groupId: string | null): Promise<string> {
+/** Takes every map screen; returns the read-only link it created and the private map's page. */
+export async function mapPages(page: Page, base: string, take: Take, groupId: string | null): Promise<{ link: string; privateMap: string }> {
   const field = await api(page, "POST", "/api/maps", { ...FIELD_MAP, groupId, visibility: groupId ? "group" : "private" });
   if (field.status !== 201) throw new Error(`field map refused: ${JSON.stringify(field.body)}`);
   const rateId = await newMapForm(page, base, take);
@@ -97,7 +97,7 @@ export async function mapPages(page: Page, base: string, take: Take, groupId: st
   await page.getByRole("list", { name: "Maps" }).waitFor();
   await take(page, "home-with-maps");
   const rate = await api(page, "GET", `/api/maps/${rateId}`);
-  return `${base}/s/${rate.body.shareToken}`;
+  return { link: `${base}/s/${rate.body.shareToken}`, privateMap: `${base}/maps/${rateId}` };
 }
 
 /** The read-only link opened signed out: the map and one of its cells. */

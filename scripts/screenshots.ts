@@ -133,9 +133,13 @@ async function otherAccounts(page: Page, base: string, inviteLink: string) {
 async function mapScreens(page: Page, base: string) {
   await signIn(page, base, head.email);
   const groups = await page.evaluate(() => fetch("/api/groups").then((r) => r.json()));
-  const link = await mapPages(page, base, take, groups.items?.[0]?.id ?? null);
+  const { link, privateMap } = await mapPages(page, base, take, groups.items?.[0]?.id ?? null);
   await signOut(page, base);
   await mapPagesSignedOut(page, take, link);
+  await signIn(page, base, loner.email);
+  await page.goto(privateMap);
+  await page.getByRole("heading", { name: "Nothing here" }).waitFor();
+  await take(page, "map-not-yours");
 }
 
 async function main() {

@@ -63,13 +63,13 @@ function TheorySection({ t }: { t: NonNullable<CellSummary["theory"]> }) {
 
 /** Every number of one cell, each with its interval and sample size. */
 export function CellReadout({ cell, muCritical }: { cell: CellSummary | undefined; muCritical: number | null }) {
-  if (!cell) return <p className="text-sm text-ink-soft">Point at a cell, or move through the grid with the arrow keys, to read its numbers here.</p>;
+  if (!cell) return <p className="text-sm text-ink-soft">Point at a cell, or move through the grid with the arrow keys, to read its numbers here. Click or tap a cell to open it.</p>;
   const m = cell.theory?.m ?? (muCritical ? cell.mu / muCritical : null);
   const where = `μ = ${formatNumber(cell.mu, 4)} · τ = ${formatNumber(cell.tau, 4)}${m !== null ? ` · m = ${formatNumber(m)}` : ""}`;
   const status = cell.state === "done" ? (cell.fromCache ? "Done, from the cache" : "Computed for this map") : cell.state === "pending" ? "Pending" : cell.state === "failed" ? "Failed" : "Cancelled";
   const runs = `${cell.networks} networks × ${cell.starts} starts`;
   return (
-    <div className="flex flex-col gap-2.5" aria-live="polite">
+    <div className="flex flex-col gap-2.5">
       <div>
         <p className="font-mono text-sm text-ink">{where}</p>
         <p className="text-xs text-ink-soft">

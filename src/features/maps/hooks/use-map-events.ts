@@ -45,7 +45,14 @@ export function useMapEvents(id: string, status: MapStatus | undefined, share?: 
         return null;
       }
     };
-    source.onopen = () => setOpen(true);
+    // The browser reconnects by itself after a drop; cells that finished meanwhile sent no
+    // event to us, so a reopened stream refetches the grid once.
+    let opened = false;
+    source.onopen = () => {
+      if (opened) void queryClient.invalidateQueries({ queryKey: mapKeys.grid(id) });
+      opened = true;
+      setOpen(true);
+    };
     source.onerror = () => setOpen(source.readyState === EventSource.OPEN);
     source.addEventListener("cell", (e) => {
       const cell = read<CellSummary>(e);
