@@ -129,7 +129,8 @@ function Placed({ probe, map }: { probe: ProbeView; map: MapView }) {
 
 /** Placement of the probe's (μ/ĝ, τ̂) on a chosen rate-network map. */
 export function MapPlacement({ probe }: { probe: ProbeView }) {
-  const list = useQuery(mapQueries.list({ scope: "all", sort: "newest" }));
+  // Always refetched on opening: a map made a moment ago elsewhere must be on offer.
+  const list = useQuery({ ...mapQueries.list({ scope: "all", sort: "newest" }), refetchOnMount: "always" });
   const rateMaps = (list.data?.items ?? []).filter((m) => m.ensemble === "rate");
   const [chosen, setChosen] = useState<string>("");
   const mapId = chosen || rateMaps[0]?.id || "";

@@ -16,10 +16,11 @@ export function EquilibriaTable({ probeId, result }: { probeId: string; result: 
   }
   return (
     <div className="overflow-x-auto">
-      <table className="w-full min-w-[44rem] border-collapse" aria-label="Distinct equilibria">
+      <table className="w-full min-w-[46rem] border-collapse" aria-label="Distinct equilibria">
         <thead className="border-b border-line">
           <tr>
             <th className={th}>#</th>
+            <th className={th}>Download</th>
             <th className={th}>Stability</th>
             <th className={th} title="Unstable directions: eigenvalues of the Jacobian with Re λ > 0">Index</th>
             <th className={th}>max Re λ</th>
@@ -28,21 +29,12 @@ export function EquilibriaTable({ probeId, result }: { probeId: string; result: 
             <th className={th}>Starts</th>
             <th className={th}>Basin share</th>
             <th className={th}>Mean settle t</th>
-            <th className={th}>Download</th>
           </tr>
         </thead>
         <tbody className="divide-y divide-line">
           {result.equilibria.map((e) => (
             <tr key={e.e}>
               <td className={td}>{e.e}</td>
-              <td className="px-3 py-1.5">{e.stable ? <Badge tone="moss">stable</Badge> : <Badge tone="ember">unstable</Badge>}</td>
-              <td className={td}>{e.index}</td>
-              <td className={td}>{num(e.maxRealPart)}</td>
-              <td className={td}>{num(e.normRms)}</td>
-              <td className={td}>{num(e.normInf)}</td>
-              <td className={td}>{e.hits}</td>
-              <td className={td}>{share(e.basinShare)}</td>
-              <td className={td}>{num(e.meanSettleTime)}</td>
               <td className="px-3 py-1.5 text-xs whitespace-nowrap">
                 <a className="text-well-700 hover:underline" href={apiPaths.probes.equilibrium(probeId, e.e, "csv")} download aria-label={`Equilibrium ${e.e} as CSV`}>
                   CSV
@@ -52,6 +44,14 @@ export function EquilibriaTable({ probeId, result }: { probeId: string; result: 
                   JSON
                 </a>
               </td>
+              <td className="px-3 py-1.5">{e.stable ? <Badge tone="moss">stable</Badge> : <Badge tone="ember">unstable</Badge>}</td>
+              <td className={td}>{e.index}</td>
+              <td className={td}>{num(e.maxRealPart)}</td>
+              <td className={td}>{num(e.normRms)}</td>
+              <td className={td}>{num(e.normInf)}</td>
+              <td className={td}>{e.hits}</td>
+              <td className={td}>{share(e.basinShare)}</td>
+              <td className={td}>{num(e.meanSettleTime)}</td>
             </tr>
           ))}
         </tbody>
