@@ -83,6 +83,20 @@ describe("new-map form", () => {
     expect(await fieldError("Starts per network S")).toMatch(/runs per cell \(networks × starts\)": at most 2048 for members, got 4096/);
   });
 
+  it("switches to the field network's settings and checks its cross-field rule", async () => {
+    const { user } = await openForm("fieldform");
+    await user.click(screen.getByRole("radio", { name: /Gaussian field network/ }));
+    // Field defaults of new-map-defaults.ts: N = 20, σ = 1; the rate network's g is gone.
+    expect((screen.getByLabelText("Units N") as HTMLInputElement).value).toBe("20");
+    expect((screen.getByLabelText("Jacobian scale σ") as HTMLInputElement).value).toBe("1");
+    expect(screen.queryByLabelText("Coupling gain g")).toBeNull();
+    await user.type(screen.getByLabelText("Title"), "Field with exhaustive search");
+    await user.click(screen.getByRole("checkbox", { name: /Exhaustive search/ }));
+    await user.click(screen.getByRole("button", { name: "Launch map" }));
+    // createMapSchema's superRefine: exhaustive search only up to N = 10.
+    expect(await screen.findByText("Exhaustive search is limited to N ≤ 10")).toBeTruthy();
+  });
+
   it("launches a valid map and opens it, queued with every cell pending", async () => {
     const { user, view } = await openForm("launcher");
     await user.type(screen.getByLabelText("Title"), "Two by two");
