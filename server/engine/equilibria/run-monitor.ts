@@ -107,6 +107,11 @@ export class RunMonitor {
     return false;
   }
 
+  /** True when the probe ran and its exponent is within ±lyapunovThreshold of 0 (neutral, as on a cycle or torus). */
+  neutralExponent(): boolean {
+    return this.lyapunov !== null && Math.abs(this.lyapunov) <= this.settings.lyapunovThreshold;
+  }
+
   /** True when the probe (if it ran) found a clearly positive exponent. */
   clearlyPositive(): boolean {
     return this.lyapunov !== null && this.lyapunov > this.settings.lyapunovThreshold && this.lyapunovGrowth > MIN_GROWTH;

@@ -18,7 +18,13 @@ import { RunMonitor } from "./run-monitor";
 import { resolveRunSettings, type RunOptions, type RunSettings } from "./run-settings";
 import { TraceRecorder, type Trace } from "./trace";
 
-/** How one run ended. "settled": reached a verified equilibrium (by Newton or basin entry). */
+/**
+ * How one run ended. "settled": reached a verified equilibrium (by Newton or basin entry);
+ * "unverified": nearly still but Newton found no verified equilibrium close by; "slow": still
+ * converging at tMax; "periodic": periodic-looking (returns near an earlier state, or a neutral
+ * finite-time Lyapunov exponent while the speed does not decay); "irregular": clearly positive
+ * exponent; "escaping": blow-up or non-finite values; "unclassified": none of these.
+ */
 export type RunClass = "settled" | "unverified" | "slow" | "periodic" | "irregular" | "escaping" | "unclassified";
 
 export interface RunOutcome {
@@ -151,7 +157,8 @@ class RunContext {
       const e = this.refine(r.x, true);
       this.outcomes[i] = e < 0 ? { ...base, class: "slow" } : { ...base, class: "settled", equilibrium: e, via: "slow" };
     } else {
-      this.outcomes[i] = { ...base, class: m.history.returns(r.x) ? "periodic" : "unclassified" };
+      const periodic = m.history.returns(r.x) || m.neutralExponent();
+      this.outcomes[i] = { ...base, class: periodic ? "periodic" : "unclassified" };
     }
   }
 
