@@ -6,7 +6,7 @@ import { integrate } from "../../../../server/engine/integrate/integrate";
 import { getEnsemble } from "../../../../server/engine/ensembles/registry";
 import { createRng } from "../../../../server/engine/random/rng";
 import { normInf } from "../../../../server/engine/linalg/vector";
-import { blowUp, creeping, hopf, lorenz, poisoned, quartic2 } from "./toy-networks";
+import { blowUp, creeping, hopf, lorenz, poisoned, quartic2, torus } from "./toy-networks";
 
 const starts = (n: number, count: number, scale: number, seed = 1) => {
   const rng = createRng(seed);
@@ -57,6 +57,12 @@ describe("runStarts classifies runs that never settle", () => {
   it("a stable limit cycle is periodic", () => {
     const r = runStarts(hopf, [Float64Array.of(0.5, 0)], { tMax: 100, lyapunovAt: 0.25 });
     expect(r.outcomes[0].class).toBe("periodic");
+  });
+
+  it("a quasi-periodic torus is periodic-looking, with a neutral Lyapunov exponent", () => {
+    const r = runStarts(torus, [Float64Array.of(0.5, 0, 0, 0.7)], { tMax: 200 });
+    expect(r.outcomes[0].class).toBe("periodic");
+    expect(Math.abs(r.outcomes[0].lyapunov!)).toBeLessThan(0.02);
   });
 
   it("the Lorenz attractor is irregular, stopped early by a positive Lyapunov exponent", () => {

@@ -48,3 +48,29 @@ export const quartic2 = net(
   },
   (x, o) => o.set([1 - 3 * x[0] ** 2, 0, 0, 1 - 3 * x[1] ** 2]),
 );
+
+/** Two uncoupled Hopf oscillators with frequencies 1 and √2: a quasi-periodic 2-torus (closed form). */
+export const torus = net(
+  4,
+  (x, o) => {
+    const w = [1, Math.SQRT2];
+    for (let k = 0; k < 2; k++) {
+      const [a, b] = [x[2 * k], x[2 * k + 1]];
+      const r2 = a * a + b * b;
+      o[2 * k] = (1 - r2) * a - w[k] * b;
+      o[2 * k + 1] = w[k] * a + (1 - r2) * b;
+    }
+  },
+  (x, o) => {
+    o.fill(0);
+    const w = [1, Math.SQRT2];
+    for (let k = 0; k < 2; k++) {
+      const [a, b] = [x[2 * k], x[2 * k + 1]];
+      const [i, j] = [2 * k, 2 * k + 1];
+      o[i * 4 + i] = 1 - 3 * a * a - b * b;
+      o[i * 4 + j] = -w[k] - 2 * a * b;
+      o[j * 4 + i] = w[k] - 2 * a * b;
+      o[j * 4 + j] = 1 - a * a - 3 * b * b;
+    }
+  },
+);
