@@ -79,7 +79,7 @@ describe("map journey in chromium", () => {
     expect(before).toBeGreaterThan(0);
     await expect.poll(() => pendingCells(page), { timeout: 60_000 }).toBeLessThan(before);
     await screenshot(page, "maps-02-filling");
-    await expect.poll(() => pendingCells(page), { timeout: 120_000, intervals: [500] }).toBe(0);
+    await expect.poll(() => pendingCells(page), { timeout: 120_000, interval: 500 }).toBe(0);
     await expect.poll(() => page.getByText(`${MU_STEPS * TAU_STEPS} of ${MU_STEPS * TAU_STEPS} cells`, { exact: true }).isVisible()).toBe(true);
     // Same document all along: the cells arrived over the event stream, not by reloading.
     expect(await page.evaluate(() => (window as unknown as { stayedOpen?: boolean }).stayedOpen)).toBe(true);
