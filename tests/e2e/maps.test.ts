@@ -96,7 +96,7 @@ describe("map journey in chromium", () => {
     await page.waitForURL(mapUrl);
   });
 
-  it("exports the data as CSV and the figure as SVG", async () => {
+  it("exports the data as CSV and the figure as SVG and PNG", async () => {
     const csvDownload = page.waitForEvent("download");
     await page.getByRole("link", { name: "Data CSV" }).click();
     const csv = await readFile((await (await csvDownload).path())!, "utf8");
@@ -114,6 +114,12 @@ describe("map journey in chromium", () => {
     expect(svg).toContain("relaxation rate μ");
     expect(svg).toContain("lower bound: more starts can only find more");
     expect(svg).not.toContain("tabindex");
+
+    const pngDownload = page.waitForEvent("download");
+    await page.getByRole("button", { name: "Figure PNG" }).click();
+    const png = await readFile((await (await pngDownload).path())!);
+    expect([...png.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]); // PNG signature (RFC 2083 §3.1)
+    expect(png.readUInt32BE(16)).toBeGreaterThan(1000); // IHDR width: the figure drawn at twice its size
   });
 
   it("shares the map by a read-only link", async () => {

@@ -39,26 +39,23 @@ export function downloadBlob(blob: Blob, name: string): void {
   setTimeout(() => URL.revokeObjectURL(url), 10_000);
 }
 
-/** Rasterises SVG text of the given size to a PNG blob at `scale`× (default 2). */
+/**
+ * Rasterises SVG text of the given size to a PNG blob at `scale`× (default 2). The SVG goes in
+ * as a data: URL: the app's Content-Security-Policy allows images from data: but not blob:.
+ */
 export async function svgToPng(svgText: string, width: number, height: number, scale = 2): Promise<Blob> {
-  const url = URL.createObjectURL(new Blob([svgText], { type: "image/svg+xml" }));
-  try {
-    const img = new Image();
-    img.decoding = "sync";
-    await new Promise<void>((resolve, reject) => {
-      img.onload = () => resolve();
-      img.onerror = () => reject(new Error("The figure could not be drawn as an image"));
-      img.src = url;
-    });
-    const canvas = document.createElement("canvas");
-    canvas.width = Math.round(width * scale);
-    canvas.height = Math.round(height * scale);
-    const ctx = canvas.getContext("2d");
-    if (!ctx) throw new Error("This browser cannot draw on a canvas");
-    ctx.scale(scale, scale);
-    ctx.drawImage(img, 0, 0, width, height);
-    return await new Promise<Blob>((resolve, reject) => canvas.toBlob((b) => (b ? resolve(b) : reject(new Error("PNG encoding failed"))), "image/png"));
-  } finally {
-    URL.revokeObjectURL(url);
-  }
+  const img = new Image();
+  await new Promise<void>((resolve, reject) => {
+    img.onload = () => resolve();
+    img.onerror = () => reject(new Error("The figure could not be drawn as an image"));
+    img.src = `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svgText)}`;
+  });
+  const canvas = document.createElement("canvas");
+  canvas.width = Math.round(width * scale);
+  canvas.height = Math.round(height * scale);
+  const ctx = canvas.getContext("2d");
+  if (!ctx) throw new Error("This browser cannot draw on a canvas");
+  ctx.scale(scale, scale);
+  ctx.drawImage(img, 0, 0, width, height);
+  return new Promise<Blob>((resolve, reject) => canvas.toBlob((b) => (b ? resolve(b) : reject(new Error("PNG encoding failed"))), "image/png"));
 }
