@@ -10,7 +10,8 @@ import { mapThumbnail } from "../lib/thumbnail";
 import { StatusBadge } from "./status-badge";
 
 function Thumbnail({ map }: { map: MapView }) {
-  const grid = useQuery(mapQueries.grid(map.id));
+  const filling = map.status === "queued" || map.status === "running";
+  const grid = useQuery({ ...mapQueries.grid(map.id), refetchInterval: filling ? 10_000 : false });
   const src = useMemo(() => (grid.data ? mapThumbnail(buildGrid(map, grid.data.cells), "stable-found") : null), [grid.data, map]);
   return (
     <div className="flex h-20 w-28 shrink-0 items-center justify-center overflow-hidden rounded-lg bg-paper ring-1 ring-line">

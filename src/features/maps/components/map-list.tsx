@@ -15,7 +15,11 @@ const EMPTY: Record<MapListFilters["scope"], { title: string; text: string }> = 
 
 /** The maps matching the filters, as cards; its own loading, error and empty states. */
 export function MapList({ filters, myId }: { filters: MapListFilters; myId: string }) {
-  const list = useQuery(mapQueries.list(filters));
+  // While any listed map is filling, its progress is refreshed every few seconds; idle lists are not polled.
+  const list = useQuery({
+    ...mapQueries.list(filters),
+    refetchInterval: (q) => (q.state.data?.items.some((m) => m.status === "queued" || m.status === "running") ? 5000 : false),
+  });
   if (list.isPending) return <LoadingBlock label="Loading maps…" />;
   if (list.isError) return <p className="px-1 py-6 text-sm text-rose-700">Could not load maps: {list.error.message}</p>;
   const items = list.data.items;
