@@ -1,6 +1,7 @@
 // Engine benchmark (prints figures; not a test). `npm run bench:engine [-- options]`
 //   (no options)            rate network N = 50, 100, 200 and field network N = 10, 20, 40:
 //                           trajectories/s, RHS evaluations/s, RHS GFLOP/s, one cell serial and pooled
+//                           (--only rate | --only field for one ensemble)
 //   --compare-scipy         the scipy reference (scripts/reference/scipy_rk45_cell.py, N = 100,
 //                           32 starts) against our serial and all-core runs on the same J and starts
 //   --compare-methods       dopri5 against odex on the rate network, N = 50 and 100
@@ -78,17 +79,18 @@ async function cellFigures(pool: EnginePool, input: CellInput): Promise<void> {
   );
 }
 
-async function standard(pool: EnginePool): Promise<void> {
+async function standard(pool: EnginePool, only: string | undefined): Promise<void> {
   const base = { ensemble: "rate", mu: 1, tau: 0.5, seed: 1, budget: { networks: 8, starts: 16, tMax: 200, rtol: 1e-6, atol: 1e-9 } };
-  for (const N of [50, 100, 200]) {
+  for (const N of only === "field" ? [] : [50, 100, 200]) {
     const input: CellInput = { ...base, params: { N, g: 2 } };
     const ens = getEnsemble("rate");
     const net = ens.build(input.params, ens.draw(input.params, 1, 0), 1, 0.5);
     runFigures(`rate N=${N} g=2 τ=0.5`, net, Array.from({ length: 32 }, (_, s) => drawStart(input, N, 0, s, net.stateScale)));
     await cellFigures(pool, input);
   }
-  for (const N of [10, 20, 40]) {
-    const input: CellInput = { ...base, ensemble: "field", params: { N }, mu: 0.7 * Math.sqrt(N) };
+  for (const N of only === "rate" ? [] : [10, 20, 40]) {
+    // the field's RHS costs O(M·N) with M = 40N sines: a smaller cell keeps the benchmark short
+    const input: CellInput = { ...base, ensemble: "field", params: { N }, mu: 0.7 * Math.sqrt(N), budget: { ...base.budget, networks: 4, starts: 8 } };
     const ens = getEnsemble("field");
     const net = ens.build(input.params, ens.draw(input.params, 1, 0), input.mu, 0.5);
     runFigures(`field N=${N} M=${40 * N} m=0.7 τ=0.5`, net, Array.from({ length: 32 }, (_, s) => drawStart(input, N, 0, s, net.stateScale)));
@@ -172,7 +174,10 @@ async function main(): Promise<void> {
     if (argv.includes("--compare-scipy")) await compareScipy(pool);
     else if (argv.includes("--compare-methods")) compareMethods();
     else if (argv.includes("--couplings")) await onFiles(argv, pool);
-    else await standard(pool);
+    else {
+      const oi = argv.indexOf("--only");
+      await standard(pool, oi >= 0 ? argv[oi + 1] : undefined);
+    }
   } finally {
     await pool.close();
   }
