@@ -1,6 +1,7 @@
 // Takes a screenshot of every client page at 1280 px and 390 px wide into .data/screenshots/
 // (tour-*.png), against the real app (with a map worker) on a private throwaway PostgreSQL
-// seeded with the demo lab; the map screens come from scripts/screenshots-maps.ts.
+// seeded with the demo lab; the map screens come from scripts/screenshots-maps.ts, the probe
+// screens from scripts/screenshots-probe.ts.
 // Run: node --import tsx scripts/screenshots.ts   (SHOTS_PG_PORT picks the database port, default 54332)
 import { execFileSync } from "node:child_process";
 import { rmSync } from "node:fs";
@@ -12,6 +13,7 @@ import { DESKTOP, launchBrowser, PHONE, screenshot, SCREENSHOT_DIR } from "../te
 import { prepareTemplateDatabase } from "../tests/helpers/db-template";
 import { startE2eApp } from "../tests/helpers/e2e-app";
 import { mapPages, mapPagesSignedOut } from "./screenshots-maps";
+import { probePages } from "./screenshots-probe";
 
 const ROOT = path.resolve(import.meta.dirname, "..");
 const PORT = Number(process.env.SHOTS_PG_PORT ?? 54332);
@@ -142,6 +144,13 @@ async function mapScreens(page: Page, base: string) {
   await take(page, "map-not-yours");
 }
 
+/** The probe screens, as the lab head (whose rate map from the map screens is on offer for placement). */
+async function probeScreens(page: Page, base: string) {
+  await signOut(page, base);
+  await signIn(page, base, head.email);
+  await probePages(page, base, take);
+}
+
 async function main() {
   pg("pg_up");
   try {
@@ -158,6 +167,8 @@ async function main() {
       await otherAccounts(page, app.baseUrl, inviteLink);
       await signOut(page, app.baseUrl);
       await mapScreens(page, app.baseUrl);
+      await probeScreens(page, app.baseUrl);
+      await signOut(page, app.baseUrl);
       if (browser.problems.length) console.warn(`[screenshots] page problems:\n  ${browser.problems.join("\n  ")}`);
       console.log(`[screenshots] ${shot} pages × 2 widths in ${SCREENSHOT_DIR}`);
     } finally {

@@ -37,7 +37,7 @@ export function ProbesListPage() {
           ) : probes.isError ? (
             <CardBody className="text-sm text-rose-700">Could not load the matrices: {probes.error.message}</CardBody>
           ) : probes.data.items.length === 0 ? (
-            <EmptyState title="No matrices yet">Upload one with the form; the analysis appears as soon as it is read.</EmptyState>
+            <EmptyState title="No matrices yet">Upload one with the form: its estimates and spectrum open as soon as the file is read.</EmptyState>
           ) : (
             <ProbeList probes={probes.data.items} />
           )}
