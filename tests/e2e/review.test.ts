@@ -62,8 +62,9 @@ describe("review journey in chromium", () => {
     await page.waitForURL("**/account");
     const box = page.getByRole("checkbox", { name: /E-mail me when a map finishes/ });
     const saved = page.waitForResponse((r) => r.url().endsWith("/api/account/preferences") && r.request().method() === "PATCH");
-    await box.check();
+    await box.click(); // a controlled switch: it shows the new state once the cache updates
     expect((await saved).status()).toBe(200);
+    await expect.poll(() => box.isChecked()).toBe(true);
     await screenshot(page, "review-account", [DESKTOP, PHONE]);
   });
 

@@ -11,7 +11,7 @@ export const ENGINE_SETTINGS: MapReport["engineSettings"] = Object.freeze([
   { name: "Integrator", value: "Dormand–Prince 5(4), adaptive, batched over starts", meaning: "How each start is integrated until still or tMax" },
   { name: "Stillness hand-off", value: "‖dx/dt‖∞ < 1e-5", meaning: "A nearly still state is handed to Newton's method" },
   { name: "Verification", value: "‖F(x*)‖∞ < 1e-10", meaning: "A fixed point counts only after Newton refinement reaches this residual" },
-  { name: "Merge distance", value: `‖x − y‖∞ ≤ ${DEFAULT_MERGE_TOL} · max(1, ‖x‖∞)`, meaning: "Two refined fixed points closer than this are one" },
+  { name: "Merge distance", value: `‖x − y‖∞ ≤ ${DEFAULT_MERGE_TOL.toExponential()} · max(1, ‖x‖∞)`, meaning: "Two refined fixed points closer than this are one" },
   { name: "Basin radius", value: "1e-3 · max(1, state scale)", meaning: "A run entering this ball around a known stable point is counted for it" },
   { name: "Stability", value: "max Re λ(J) < 0", meaning: "Stable when every Jacobian eigenvalue has negative real part" },
   { name: "Escape bound", value: "1e6 · max(1, state scale)", meaning: "A run beyond this is classed as escaping" },

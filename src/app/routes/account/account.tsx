@@ -26,7 +26,7 @@ export function AccountPage() {
         <Card>
           <CardHeader title="Details" />
           <CardBody>
-            <dl className="grid grid-cols-[8rem_1fr] gap-y-2 text-sm">
+            <dl className="grid grid-cols-[6rem_minmax(0,1fr)] gap-y-2 text-sm [&_dd]:[overflow-wrap:anywhere]">
               <dt className="text-ink-soft">Name</dt><dd className="text-ink">{user.name}</dd>
               <dt className="text-ink-soft">E-mail</dt><dd className="text-ink">{user.email}</dd>
               <dt className="text-ink-soft">Role</dt><dd className="text-ink">{user.siteRole === "admin" ? "Site admin" : "Member"}</dd>

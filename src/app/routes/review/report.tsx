@@ -1,5 +1,5 @@
 import { useQuery, type QueryClient } from "@tanstack/react-query";
-import { useMemo, type ReactNode } from "react";
+import { useMemo, useRef, type ReactNode } from "react";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import type { MapGrid, MapView } from "../../../../shared/schemas/maps";
 import type { MapBoundary, MapReport } from "../../../../shared/schemas/review";
@@ -7,6 +7,7 @@ import { Button, buttonClass } from "../../../components/ui/button";
 import { LoadingBlock } from "../../../components/ui/spinner";
 import { mapQueries } from "../../../features/maps/api/map-queries";
 import { MapFigure } from "../../../features/maps/components/heatmap/map-figure";
+import { useElementWidth } from "../../../features/maps/hooks/use-element-width";
 import { buildGrid } from "../../../features/maps/lib/grid-model";
 import { overlayCurves } from "../../../features/maps/lib/overlay-curves";
 import { reviewQueries } from "../../../features/review/api/review-queries";
@@ -18,8 +19,8 @@ import { FactsTable } from "../../../features/review/components/facts-table";
 import { reportFacts } from "../../../features/review/lib/report-facts";
 import { requireUser } from "../auth/guards";
 
-/** Width of the report's figures: one A4 column at 96 dpi (they scale down on phones). */
-const FIGURE_WIDTH = 720;
+/** Largest width of the report's figures: a heading and one figure fit on an A4 page at 96 dpi (narrower screens lay them out narrower). */
+const FIGURE_WIDTH = 560;
 
 export const reportLoader =
   (queryClient: QueryClient) =>
@@ -39,15 +40,19 @@ const PRINT_CSS = `
 @page { size: A4; margin: 14mm 12mm; }
 @media print {
   html, body { background: #ffffff !important; }
-  .report-section { break-inside: avoid-page; }
+  .report-keep, .report-section tr { break-inside: avoid-page; }
 }`;
 
-function Section({ title, children, note }: { title: string; children: ReactNode; note?: string }) {
+/** A report section; its heading, note and `lead` (a figure) stay on one printed page. */
+function Section({ title, note, lead, children }: { title: string; note?: string; lead?: ReactNode; children?: ReactNode }) {
   return (
     <section className="report-section mt-8 border-t border-line pt-5 print:mt-6">
-      <h2 className="text-lg font-semibold text-ink">{title}</h2>
-      {note && <p className="mt-1 text-sm text-ink-soft">{note}</p>}
-      <div className="mt-3">{children}</div>
+      <div className="report-keep">
+        <h2 className="text-lg font-semibold text-ink">{title}</h2>
+        {note && <p className="mt-1 text-sm text-ink-soft">{note}</p>}
+        {lead && <div className="mt-3 [&_svg]:h-auto [&_svg]:max-w-full">{lead}</div>}
+      </div>
+      {children && <div className="mt-3">{children}</div>}
     </section>
   );
 }
@@ -59,7 +64,7 @@ function shareMatrix(map: MapView, grid: MapGrid): (number | null)[][] {
   return out;
 }
 
-function Replication({ report, map }: { report: MapReport; map: MapView }) {
+function Replication({ report, map, width }: { report: MapReport; map: MapView; width: number }) {
   const partner = [...report.related].sort((a, b) => Number(b.status === "done") - Number(a.status === "done"))[0];
   const cmp = useQuery({ ...reviewQueries.compare(map.id, partner?.id ?? ""), enabled: !!partner });
   if (!partner) return <p className="text-sm text-ink-soft">No replicate yet. A replicate re-runs this map with a new seed; its agreement appears here.</p>;
@@ -68,36 +73,41 @@ function Replication({ report, map }: { report: MapReport; map: MapView }) {
   return (
     <div className="flex flex-col gap-4">
       <p className="text-sm text-ink-soft">
-        Compared with <strong className="text-ink">{partner.title}</strong> ({partner.relation}, seed {partner.seed}, {partner.status}).
+        Compared with <strong className="text-ink">{partner.title}</strong> (its {partner.relation}; {partner.status}).
       </p>
       <AgreementSummary comparison={cmp.data} />
-      <div className="[&_svg]:h-auto [&_svg]:max-w-full">
-        <DifferenceHeatmap comparison={cmp.data} mu={map.mu} tau={map.tau} layer="stableFound" width={FIGURE_WIDTH} />
+      <div className="report-keep [&_svg]:h-auto [&_svg]:max-w-full">
+        <DifferenceHeatmap comparison={cmp.data} mu={map.mu} tau={map.tau} layer="stableFound" width={width} />
       </div>
     </div>
   );
 }
 
-function ReportBody({ map, grid, report, boundary }: { map: MapView; grid: MapGrid; report: MapReport; boundary: MapBoundary }) {
+function ReportBody({ map, grid, report, boundary, width }: { map: MapView; grid: MapGrid; report: MapReport; boundary: MapBoundary; width: number }) {
   const model = useMemo(() => buildGrid(map, grid.cells), [map, grid.cells]);
   const curves = useMemo(() => new Set(overlayCurves(map, [0, 1]).map((c) => c.id)), [map]);
   const gain = map.ensemble === "rate" ? Number(map.settings.g) : null;
   return (
     <>
-      <Section title="Map" note="Distinct stable equilibria found per network (mean over the cell's networks; a lower bound of the true number), with the predicted large-N curves.">
-        <div className="[&_svg]:h-auto [&_svg]:max-w-full">
-          <MapFigure map={map} grid={model} layerId="stable-found" criteria={[]} curves={curves} width={FIGURE_WIDTH} />
-        </div>
-      </Section>
-      <Section title="Boundary estimate" note="Per τ row: the μ where the share of networks with exactly one stable state found crosses ½, against the predicted lines.">
-        <div className="[&_svg]:h-auto [&_svg]:max-w-full">
-          <BoundaryFigure mu={map.mu} tau={map.tau} mus={grid.mu} taus={grid.tau} share={shareMatrix(map, grid)} rows={boundary.rows} ensemble={map.ensemble} muCritical={map.muCritical} gain={gain} width={FIGURE_WIDTH} />
-        </div>
-        <div className="mt-2"><BoundaryLegend ensemble={map.ensemble} muCritical={map.muCritical} gain={gain} /></div>
-        <div className="mt-5"><BoundaryTable boundary={boundary} /></div>
+      <Section
+        title="Map"
+        note="Distinct stable equilibria found per network (mean over the cell's networks; a lower bound of the true number), with the predicted large-N curves."
+        lead={<MapFigure map={map} grid={model} layerId="stable-found" criteria={[]} curves={curves} width={width} />}
+      />
+      <Section
+        title="Boundary estimate"
+        note="Per τ row: the μ where the share of networks with exactly one stable state found crosses ½, against the predicted lines."
+        lead={
+          <>
+            <BoundaryFigure mu={map.mu} tau={map.tau} mus={grid.mu} taus={grid.tau} share={shareMatrix(map, grid)} rows={boundary.rows} ensemble={map.ensemble} muCritical={map.muCritical} gain={gain} width={width} />
+            <div className="mt-2"><BoundaryLegend ensemble={map.ensemble} muCritical={map.muCritical} gain={gain} /></div>
+          </>
+        }
+      >
+        <BoundaryTable boundary={boundary} />
       </Section>
       <Section title="Replication">
-        <Replication report={report} map={map} />
+        <Replication report={report} map={map} width={width} />
       </Section>
       <Section title="Settings" note="Everything that determines this map's numbers. The manifest in the map's export.json recreates it exactly.">
         <FactsTable groups={reportFacts(map, report, boundary)} />
@@ -113,6 +123,8 @@ export function ReportPage() {
   const grid = useQuery(mapQueries.grid(id));
   const report = useQuery(reviewQueries.report(id));
   const boundary = useQuery(reviewQueries.boundary(id));
+  const column = useRef<HTMLDivElement>(null);
+  const width = Math.min(FIGURE_WIDTH, useElementWidth(column, FIGURE_WIDTH));
   if (map.isPending || grid.isPending || report.isPending || boundary.isPending) return <LoadingBlock className="min-h-screen" label="Preparing the report…" />;
   const failed = map.error ?? grid.error ?? report.error ?? boundary.error;
   if (failed) throw failed;
@@ -137,7 +149,9 @@ export function ReportPage() {
           Results are Monte Carlo estimates over random networks: found counts are lower bounds of the true numbers, intervals are
           95 %, and the predicted lines are asymptotic (large N).
         </p>
-        <ReportBody map={m} grid={grid.data!} report={report.data!} boundary={boundary.data!} />
+        <div ref={column}>
+          <ReportBody map={m} grid={grid.data!} report={report.data!} boundary={boundary.data!} width={width} />
+        </div>
         <p className="mt-8 text-xs text-ink-faint print:hidden">
           <Link to={`/maps/${id}`} className={buttonClass("ghost", "sm")}>Back to the map</Link>
         </p>

@@ -21,7 +21,7 @@ export function PreferencesForm({ preferences, busy, onChange }: PreferencesForm
         <span>
           <span className="block text-sm font-medium text-ink">E-mail me when a map finishes</span>
           <span className="block text-sm text-ink-soft">
-            One message per map you own, when its last cell is done (or it stops), with a link to the map.
+            One message per map you own, when its last cell is done, with a link to the map.
           </span>
         </span>
       </label>

@@ -8,7 +8,11 @@ import { fmtShare } from "../lib/format";
 export function AgreementSummary({ comparison }: { comparison: MapComparison }) {
   const s = comparison.summary;
   const verdict =
-    s.agreeShare === null ? null : s.agreeUpper !== null && s.agreeUpper < 0.95 ? "fewer than chance alone explains: the maps differ" : "consistent with the same underlying map";
+    s.agreeShare === null
+      ? null
+      : s.agreeUpper !== null && s.agreeUpper < 0.95
+        ? "Fewer cells agree than the about 95 % expected if both maps sampled the same thing"
+        : "In line with the about 95 % expected if both maps sample the same thing";
   return (
     <div className="flex flex-col gap-2">
       <p className="text-lg font-semibold text-ink">
@@ -20,10 +24,12 @@ export function AgreementSummary({ comparison }: { comparison: MapComparison }) 
           </>
         )}
       </p>
-      {verdict && <p className="text-sm text-ink">{verdict[0].toUpperCase() + verdict.slice(1)}.</p>}
+      {verdict && <p className="text-sm text-ink">{verdict}.</p>}
       <p className="text-sm text-ink-soft">
         A cell agrees when Welch&apos;s t test on the per-network counts of stable states finds no difference at the 5 % level. If both
-        maps sample the same distribution, about 95 % of cells agree by chance alone. {s.cells - s.tested > 0 && `${s.cells - s.tested} cells are not done on both sides yet. `}
+        maps sample the same distribution, about 95 % of cells agree by chance alone. The cells of one map share its networks (common
+        random numbers), so their verdicts are correlated and the interval is a guide, not a test; with few networks per cell Welch&apos;s
+        test is approximate (each cell also shows an exact permutation p-value when it is cheap). {s.cells - s.tested > 0 && `${s.cells - s.tested} cells are not done on both sides yet. `}
         Settings that differ: {s.differingSettings.length ? s.differingSettings.join(", ") : "none"}.
       </p>
     </div>

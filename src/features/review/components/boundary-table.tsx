@@ -44,7 +44,7 @@ export function BoundaryTable({ boundary }: { boundary: MapBoundary }) {
         <tbody className="font-mono text-[0.82rem]">
           {boundary.rows.map((r) => (
             <tr key={r.j} className="border-b border-line align-top">
-              <th scope="row" className="py-1.5 pr-3 font-medium">{fmt(r.tau)}</th>
+              <th scope="row" className="py-1.5 pr-3 text-left font-medium">{fmt(r.tau)}</th>
               <td className="py-1.5 pr-3">
                 {r.muHalf === null ? <span className="font-sans text-xs text-ink-soft">{STATUS_WORDS[r.status]}</span> : fmt(r.muHalf)}
               </td>

@@ -3,7 +3,7 @@ import { fmt, fmtP, fmtShare, fmtSigned } from "../lib/format";
 
 /** The hovered cell of a comparison: both values, their difference and the tests. */
 export function CompareReadout({ cell, names }: { cell: CompareCell | null; names: [string, string] }) {
-  if (!cell) return <p className="text-sm text-ink-soft">Point at a cell to see both maps&apos; numbers and the test.</p>;
+  if (!cell) return <p className="text-sm text-ink-soft">Point at or tap a cell to see both maps&apos; numbers and the test.</p>;
   const row = (label: string, a: string, b: string, d: string) => (
     <tr className="border-b border-line">
       <th scope="row" className="py-1 pr-2 text-left font-normal text-ink-soft">{label}</th>

@@ -22,7 +22,7 @@ interface DifferenceHeatmapProps {
   compact?: boolean;
 }
 
-const M = { left: 52, right: 14, top: 34, bottom: 74 };
+const M = { left: 52, right: 14, top: 34, bottom: 84 };
 
 /** Largest |a − b| of the layer, rounded up to a tidy legend end. */
 function extentOf(cells: CompareCell[], layer: DifferenceLayer): number {
@@ -32,8 +32,12 @@ function extentOf(cells: CompareCell[], layer: DifferenceLayer): number {
   return Math.ceil(most / p) * p;
 }
 
+/** Below this width the ring's key goes under the colour bar. */
+const NARROW = 460;
+
 function Legend({ extent, width, y }: { extent: number; width: number; y: number }) {
   const w = Math.min(240, width - M.left - M.right);
+  const ring = width < NARROW ? { x: 0, y: 34 } : { x: w + 18, y: 0 };
   const stops = Array.from({ length: 9 }, (_, k) => -extent + (2 * extent * k) / 8);
   return (
     <g transform={`translate(${M.left},${y})`}>
@@ -44,7 +48,7 @@ function Legend({ extent, width, y }: { extent: number; width: number; y: number
       <text y={24} fontSize={11} fill={FIGURE_INK}>{fmtSigned(-extent)}</text>
       <text x={w / 2} y={24} fontSize={11} fill={FIGURE_INK} textAnchor="middle">0</text>
       <text x={w} y={24} fontSize={11} fill={FIGURE_INK} textAnchor="end">{fmtSigned(extent)}</text>
-      <g transform={`translate(${w + 18},0)`}>
+      <g transform={`translate(${ring.x},${ring.y})`}>
         <circle cx={5} cy={5} r={3.2} fill="none" stroke={FIGURE_INK} strokeWidth={1.4} />
         <text x={14} y={9} fontSize={11} fill={FIGURE_INK}>differs at 5 %</text>
       </g>
@@ -60,7 +64,7 @@ function Legend({ extent, width, y }: { extent: number; width: number; y: number
 export function DifferenceHeatmap({ comparison, mu, tau, layer, width, onHover, compact }: DifferenceHeatmapProps) {
   const plotW = Math.max(120, width - M.left - M.right);
   const plotH = Math.max(100, Math.min(plotW * 0.62, 44 * tau.steps + 40));
-  const height = M.top + plotH + M.bottom;
+  const height = M.top + plotH + M.bottom + (width < NARROW ? 22 : 0);
   const x = gridScale(mu, [0, plotW]);
   const y = gridScale(tau, [plotH, 0]);
   const extent = extentOf(comparison.cells, layer);
@@ -83,7 +87,7 @@ export function DifferenceHeatmap({ comparison, mu, tau, layer, width, onHover, 
           const [y1, y0] = y.band(c.j);
           const d = c.difference[layer];
           return (
-            <g key={`${c.i},${c.j}`} onPointerEnter={() => onHover?.(c)}>
+            <g key={`${c.i},${c.j}`} onPointerEnter={() => onHover?.(c)} onClick={() => onHover?.(c)}>
               <rect x={x0} y={y0} width={x1 - x0 + 0.4} height={y1 - y0 + 0.4} fill={d === null ? `url(#${hatch})` : divergingColor(d, extent)} />
               {c.agree === false && <circle cx={(x0 + x1) / 2} cy={(y0 + y1) / 2} r={ringR} fill="none" stroke={FIGURE_INK} strokeWidth={1.4} />}
             </g>
@@ -99,7 +103,7 @@ export function DifferenceHeatmap({ comparison, mu, tau, layer, width, onHover, 
         ))}
         <text transform={`translate(${-38},${plotH / 2}) rotate(-90)`} fontSize={11} textAnchor="middle" fill={FIGURE_SOFT}>asymmetry τ</text>
       </g>
-      <Legend extent={extent} width={width} y={M.top + plotH + 52} />
+      <Legend extent={extent} width={width} y={M.top + plotH + 50} />
     </svg>
   );
 }

@@ -2,11 +2,10 @@
 // the first map found fewer, warm where it found more, paper at zero) and a sequential ramp for
 // shares. Interpolated in linear-light RGB so the midpoints do not go muddy.
 
-const COOL = "#1d5570";
-const PAPER = "#f4efe4";
-const WARM = "#b4502a";
-const SHARE_LOW = "#f7f1e3";
-const SHARE_HIGH = "#2a6f83";
+/** Ramps as colour stops, interpolated piecewise (first stop = the neutral end). */
+const COOL = ["#f4efe4", "#c9dde9", "#7eaed0", "#3b76a6", "#1b4a72"];
+const WARM = ["#f4efe4", "#f5d2b4", "#e6a06d", "#c7673a", "#8f3a17"];
+const SHARE = ["#f7f1e3", "#e3ecc8", "#a9d3b2", "#5ea9a4", "#2f7c8f", "#1f4e6b"];
 
 function toLinear(hex: string): [number, number, number] {
   const n = parseInt(hex.slice(1), 16);
@@ -22,22 +21,25 @@ function toHex(rgb: number[]): string {
   return `#${s.join("")}`;
 }
 
-function mix(a: string, b: string, t: number): string {
-  const x = toLinear(a);
-  const y = toLinear(b);
-  return toHex(x.map((v, k) => v + (y[k] - v) * t));
+/** The colour at t ∈ [0, 1] along `stops`. */
+function ramp(stops: readonly string[], t: number): string {
+  const u = Math.max(0, Math.min(1, t)) * (stops.length - 1);
+  const k = Math.min(stops.length - 2, Math.floor(u));
+  const x = toLinear(stops[k]);
+  const y = toLinear(stops[k + 1]);
+  return toHex(x.map((v, c) => v + (y[c] - v) * (u - k)));
 }
 
 /** Colour of a difference d on a symmetric scale [−extent, extent]. */
 export function divergingColor(d: number, extent: number): string {
-  if (!(extent > 0)) return PAPER;
+  if (!(extent > 0)) return COOL[0];
   const t = Math.max(-1, Math.min(1, d / extent));
-  return t >= 0 ? mix(PAPER, WARM, t) : mix(PAPER, COOL, -t);
+  return t >= 0 ? ramp(WARM, t) : ramp(COOL, -t);
 }
 
 /** Colour of a share in [0, 1]. */
 export function shareColor(s: number): string {
-  return mix(SHARE_LOW, SHARE_HIGH, Math.max(0, Math.min(1, s)));
+  return ramp(SHARE, s);
 }
 
 export const FIGURE_INK = "#16202a";

@@ -43,7 +43,7 @@ export function reportFacts(map: MapView, report: MapReport, boundary: MapBounda
         ["Starts per network", String(b.starts)],
         ["Runs per cell", String(runs)],
         ["Time limit tMax", fmt(b.tMax, 6)],
-        ["Integrator rtol / atol", `${b.rtol} / ${b.atol}`],
+        ["Integrator rtol / atol", `${b.rtol.toExponential()} / ${b.atol.toExponential()}`],
         ["Exhaustive search", b.exhaustive ? "yes" : "no"],
         ["Base seed", String(map.seed)],
         ...(map.replicateOf ? ([["Replicate of", map.replicateOf]] as [string, string][]) : []),
