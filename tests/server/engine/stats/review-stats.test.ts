@@ -70,6 +70,13 @@ describe("logistic fit by IRLS against numpy IRLS and scipy.optimize.minimize", 
     expect(fitLogistic(x, y, n).slope).toBeCloseTo(fitLogistic(r.x, r.successes, r.trials).slope, 9);
     expect(fitLogistic(x, y, n, { method: "firth" }).slope).toBeCloseTo(fitLogistic(r.x, r.successes, r.trials, { method: "firth" }).slope, 8);
   });
+  it("reaches the same optimum from another start (a bootstrap refit starts from the full fit)", () => {
+    const r = ref.logisticFirth[1];
+    const fit = fitLogistic(r.x, r.successes, r.trials, { method: "firth", start: [3, -2] });
+    expect(fit.intercept).toBeCloseTo(r.intercept, 5);
+    expect(fit.slope).toBeCloseTo(r.slope, 4);
+    expect(() => fitLogistic(r.x, r.successes, r.trials, { start: [NaN, 0] })).toThrow(/start/);
+  });
   it("detects separation and refuses the ML fit there", () => {
     const s = ref.logisticFirth.find((c) => c.name === "separated")!;
     expect(isSeparated(s.x, s.successes, s.trials)).toBe(true);
