@@ -41,6 +41,7 @@ export const apiRoutes = {
     cancel: "/api/maps/:id/cancel",
     grid: "/api/maps/:id/grid",
     cell: "/api/maps/:id/cells/:i/:j",
+    couplings: "/api/maps/:id/cells/:i/:j/networks/:k/couplings.:format",
     exportCsv: "/api/maps/:id/export.csv",
     exportJson: "/api/maps/:id/export.json",
     share: "/api/maps/:id/share",
@@ -97,6 +98,8 @@ export const apiPaths = {
     cancel: (id: string) => `/api/maps/${seg(id)}/cancel`,
     grid: (id: string) => `/api/maps/${seg(id)}/grid`,
     cell: (id: string, i: number, j: number) => `/api/maps/${seg(id)}/cells/${i}/${j}`,
+    couplings: (id: string, i: number, j: number, k: number, format: "npy" | "csv") =>
+      `/api/maps/${seg(id)}/cells/${i}/${j}/networks/${k}/couplings.${format}`,
     exportCsv: (id: string) => `/api/maps/${seg(id)}/export.csv`,
     exportJson: (id: string) => `/api/maps/${seg(id)}/export.json`,
     share: (id: string) => `/api/maps/${seg(id)}/share`,

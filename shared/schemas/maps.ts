@@ -232,3 +232,9 @@ export const mapExportSchema = z.object({
   cells: z.array(cellSummarySchema.extend({ cellKey: z.string() })),
 });
 export type MapExport = z.infer<typeof mapExportSchema>;
+
+/** GET /api/maps/:id/cells/:i/:j/networks/:k/couplings.(npy|csv): one network's coupling matrix. */
+export const couplingsParamsSchema = cellParamsSchema.extend({
+  k: z.coerce.number().int().min(0).max(63),
+  format: z.enum(["npy", "csv"]),
+});

@@ -6,7 +6,9 @@ import type { TheoryColumns } from "../../../shared/schemas/theory";
 import type { Db } from "../../db/client";
 import { ENGINE_VERSION } from "../../engine/cell/cell-input";
 import type { Actor } from "../../lib/actor";
-import { NotFoundError } from "../../lib/errors";
+import { getEnsemble } from "../../engine/ensembles/registry";
+import { InvalidError, NotFoundError } from "../../lib/errors";
+import { cellInputFor, mapSpecFromRow } from "./cell-key";
 import * as cellsRepo from "./map-cells.repo";
 import { mapCsv } from "./maps.export";
 import type { MapRecord } from "./maps.repo";
@@ -68,6 +70,27 @@ export class MapReadsService {
     const result: CellResult | null = p.state === "done" ? p.result : null;
     const pos = { i: p.i, j: p.j, mu: p.mu, tau: p.tau, state: p.state, fromCache: p.fromCache, ...budgetCounts(record) };
     return { summary: summarizeCell(pos, result, theory), result, theory, cellKey: p.cellKey, fromCache: p.fromCache };
+  }
+
+  /**
+   * Coupling matrix J of network k at grid position (i, j), regenerated from the common random
+   * numbers exactly as the engine drew it (ensemble draw for (seed, k, N), then reweighted at
+   * the cell's τ). Ensembles without a coupling matrix (the field network) answer 422.
+   */
+  async couplings(actor: Reader, id: string, i: number, j: number, k: number, token?: string): Promise<{ title: string; n: number; data: Float64Array }> {
+    const { record } = await this.deps.maps.getReadable(actor, id, token);
+    const spec = mapSpecFromRow(record);
+    if (i >= spec.mu.steps || j >= spec.tau.steps) throw new NotFoundError(`No cell (${i}, ${j}) in this map`);
+    if (k >= spec.budget.networks) throw new NotFoundError(`This map has ${spec.budget.networks} networks per cell (0 to ${spec.budget.networks - 1})`);
+    const input = cellInputFor(spec, i, j);
+    const ensemble = getEnsemble(input.ensemble);
+    if (!ensemble.couplings) {
+      throw new InvalidError(`The ${ensemble.label} has no coupling matrix to download`, [{ path: "k", message: "No coupling matrix for this ensemble" }]);
+    }
+    const n = ensemble.dimension(input.params);
+    const data = ensemble.couplings(input.params, ensemble.draw(input.params, input.seed, k), input.mu, input.tau);
+    if (!data) throw new InvalidError("This network has no coupling matrix to download");
+    return { title: `${record.title} cell ${i}-${j} network ${k}`, n, data };
   }
 
   /** JSON export: the manifest that recreates the map, versions, every cell's summary and key. */

@@ -91,7 +91,17 @@ export function mapCsv(meta: CsvMeta, cells: readonly CellSummary[]): string {
 }
 
 /** A file name from the title: letters, digits and dashes. */
-export function exportFileName(title: string, ext: "csv" | "json"): string {
+export function exportFileName(title: string, ext: "csv" | "json" | "npy"): string {
   const base = title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60) || "map";
   return `${base}.${ext}`;
+}
+
+/**
+ * A coupling matrix as CSV: N rows of N comma-separated values, row i holding J_i1 … J_iN, with
+ * the shortest text that reads back to the same double (JavaScript's number-to-string).
+ */
+export function couplingsCsv(data: Float64Array, n: number): string {
+  const rows: string[] = [];
+  for (let i = 0; i < n; i++) rows.push(Array.from(data.subarray(i * n, (i + 1) * n), String).join(","));
+  return rows.join("\n") + "\n";
 }

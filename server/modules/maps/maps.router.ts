@@ -1,12 +1,13 @@
 import { Router } from "express";
 import { apiRoutes } from "../../../shared/schemas/api-paths";
 import {
-  cellParamsSchema, createMapSchema, gridQuerySchema, mapIdParamsSchema, mapListQuerySchema,
+  cellParamsSchema, couplingsParamsSchema, createMapSchema, gridQuerySchema, mapIdParamsSchema, mapListQuerySchema,
   shareQuerySchema, shareTokenParamsSchema, updateMapSchema,
 } from "../../../shared/schemas/maps";
 import { validate } from "../../lib/validate";
 import type { MapReadsService } from "./map-reads.service";
-import { exportFileName } from "./maps.export";
+import { writeNpy } from "../../engine/io/npy-write";
+import { couplingsCsv, exportFileName } from "./maps.export";
 import type { MapsService } from "./maps.service";
 
 const paths = apiRoutes.maps;
@@ -49,6 +50,14 @@ export function createMapsRouter(maps: MapsService, reads: MapReadsService): Rou
   router.get(paths.cell, validate({ params: cellParamsSchema, query: shareQuerySchema }), async (req, res) => {
     const { id, i, j } = req.params;
     res.json(await reads.cell(req.actor, id, i, j, req.query.share));
+  });
+
+  router.get(paths.couplings, validate({ params: couplingsParamsSchema, query: shareQuerySchema }), async (req, res) => {
+    const { id, i, j, k, format } = req.params;
+    const { title, n, data } = await reads.couplings(req.actor, id, i, j, k, req.query.share);
+    res.attachment(exportFileName(`${title} couplings`, format));
+    if (format === "npy") res.type("application/octet-stream").send(Buffer.from(writeNpy(data, [n, n])));
+    else res.type("text/csv; charset=utf-8").send(couplingsCsv(data, n));
   });
 
   router.get(paths.exportCsv, validate(byId), async (req, res) => {

@@ -118,7 +118,7 @@ export function SharedCellPage() {
         </span>
       </nav>
       <PageHeader title={cellTitle(shared.data, s.mu, s.tau)} description={`${s.networks} networks × ${s.starts} starts per network · read-only`} />
-      <CellDetailView map={shared.data} detail={cell.data} />
+      <CellDetailView map={shared.data} detail={cell.data} share={token} />
       <p className="mt-6 text-center">
         <Link to={`/s/${encodeURIComponent(token)}`} className={buttonClass("secondary", "sm")}>
           Back to the map
