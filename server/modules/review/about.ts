@@ -31,9 +31,9 @@ function gitCommit(): string {
 let cached: About | null = null;
 
 /**
- * What software answers: package name and version, the git commit (read once, at the first call
- * after the server starts; EQUILIBRIST_COMMIT overrides it for deployments without .git), the
- * engine version and every ensemble's version.
+ * What software answers: package name and version, the git commit (read once per process, when
+ * the review router is created at server start; EQUILIBRIST_COMMIT overrides it for deployments
+ * without .git), the engine version and every ensemble's version.
  */
 export function readAbout(): About {
   if (!cached) {

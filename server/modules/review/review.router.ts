@@ -12,6 +12,7 @@ const byId = { params: mapIdParamsSchema, query: shareQuerySchema };
 /** Review: replicate, import, compare, boundary, the report's facts and what software answers. */
 export function createReviewRouter(review: ReviewService): Router {
   const router = Router();
+  readAbout(); // the version and git commit are read once, when the server starts
 
   router.get(paths.about, (_req, res) => {
     res.json(readAbout());
