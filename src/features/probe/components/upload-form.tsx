@@ -73,6 +73,11 @@ export function UploadForm({ groups, onUploaded }: { groups: GroupChoice[]; onUp
         A square matrix J as CSV (numbers only, no header), NumPy .npy (float32 or float64, C order) or Matrix Market .mtx (coordinate or array).
         Limits: N ≤ {probeLimits.maxN} and at most {MB} MB per file.
       </p>
+      {upload.isPending && (
+        <p role="status" className="text-xs text-ink-soft">
+          Reading the file and computing all N eigenvalues of J: seconds for N of a few hundred, about a minute at N = 2000.
+        </p>
+      )}
       <TextField type="file" accept={ACCEPT} label="Coupling matrix J" hint="Row i holds the couplings into unit i: dx_i/dt = −μ x_i + Σ_j J_ij φ(x_j) + I_i." error={fileError(errors.matrix)} className="[&_input]:pt-2" {...form.register("matrix")} />
       <TextField type="file" accept={ACCEPT} label="Input vector I (optional)" hint="One value per unit, as a row or a column; leave empty for I = 0." error={fileError(errors.input)} className="[&_input]:pt-2" {...form.register("input")} />
       <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
