@@ -81,10 +81,15 @@ export interface SendManyOptions<P> extends Omit<JobSendOptions, "id"> {
    * (e.g. a multiple of the cell's estimated compute time); default: the queue's policy. Whole
    * seconds from 1 to 23 hours (pg-boss's limit is under 24 h).
    */
-  expireInSeconds?: (payload: P, index: number) => number;
+  /** Per-job expiry; undefined for a job keeps the queue's own policy. */
+  expireInSeconds?: (payload: P, index: number) => number | undefined;
 }
 
 const MAX_EXPIRE_SECONDS = 23 * 3600;
+
+function perJobExpiry(seconds: number | undefined): number | undefined {
+  return seconds === undefined ? undefined : expiry(seconds);
+}
 
 function expiry(seconds: number): number {
   if (!Number.isFinite(seconds) || seconds < 1) throw new RangeError(`expireInSeconds must be ≥ 1, got ${seconds}`);
@@ -106,7 +111,7 @@ export async function sendMany<Q extends QueueName>(
   const startAfter = options.startAfter instanceof Date ? options.startAfter.toISOString() : options.startAfter === undefined ? undefined : `${options.startAfter} seconds`;
   const jobs = checked.map((data, k) => ({
     id: ids[k], name: queue, data: data as object, priority: options.priority, startAfter,
-    expireInSeconds: options.expireInSeconds ? expiry(options.expireInSeconds(data, k)) : undefined,
+    expireInSeconds: perJobExpiry(options.expireInSeconds?.(data, k)),
   }));
   await boss.insert(jobs, { db: transactionDb(tx) });
   return ids;

@@ -5,6 +5,7 @@ import {
   FILL_CELL_QUEUE, MAP_FINISHED_QUEUE, THEORY_ROW_QUEUE,
   type FillCellPayload, type MapFinishedPayload, type TheoryRowPayload,
 } from "../../queue/queues";
+import { DEFAULT_QUEUE_POLICIES } from "../../queue/boss";
 import { sendInTransaction, sendMany, transactionDb } from "../../queue/send";
 
 /** Jobs one map operation enqueues, all inside the caller's transaction. */
@@ -29,12 +30,13 @@ export interface MapJobs {
 }
 
 /**
- * A fill-cell job may stay active three times its estimated cost, and at least the queue's
- * default (30 min), so a big cell is not timed out and retried while it is still computing; a
- * dead worker's job is still retried once that time has passed.
+ * A fill-cell job whose estimated cost is large may stay active three times that long, so a big
+ * cell is not timed out and retried while it is still computing (a dead worker's job is retried
+ * once the time has passed). Smaller jobs keep the queue's own expiry (undefined here).
  */
-export function fillCellExpiry(estimatedSeconds: number | undefined): number {
-  return Math.max(30 * 60, Math.ceil(3 * (estimatedSeconds ?? 0)));
+export function fillCellExpiry(estimatedSeconds: number | undefined): number | undefined {
+  const wanted = Math.ceil(3 * (estimatedSeconds ?? 0));
+  return wanted > DEFAULT_QUEUE_POLICIES[FILL_CELL_QUEUE].expireInSeconds ? wanted : undefined;
 }
 
 /** Largest number of ids pg-boss is asked to cancel in one statement. */
