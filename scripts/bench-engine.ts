@@ -9,7 +9,7 @@
 //                           our run on given files (.npy or JSON), equilibria written as JSON
 import { execFileSync } from "node:child_process";
 import { mkdtempSync, writeFileSync } from "node:fs";
-import { availableParallelism, tmpdir } from "node:os";
+import { availableParallelism, loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { getEnsemble } from "../server/engine/ensembles/registry";
 import { rateNetworkFromMatrix } from "../server/engine/ensembles/rate/rate-network";
@@ -19,6 +19,7 @@ import { batchedSystem } from "../server/engine/integrate/batched-system";
 import { runCell } from "../server/engine/cell/run-cell";
 import { drawStart } from "../server/engine/cell/run-network";
 import { createEnginePool, runCellParallel, runRateStartsParallel, type EnginePool } from "../server/engine/pool/engine-pool";
+import type { ShareTiming } from "../server/engine/pool/starts-task";
 import { loadEquilibriaJob, reportOf } from "../server/engine/cli/equilibria-command";
 import type { CellInput } from "../shared/schemas/cell-result";
 
@@ -100,6 +101,20 @@ async function standard(pool: EnginePool, only: string | undefined): Promise<voi
 
 const median = (v: number[]) => [...v].sort((a, b) => a - b)[v.length >> 1];
 
+/** Per worker thread of one pooled run: tasks, wall seconds inside tasks, thread CPU seconds. */
+function perThread(shares: ShareTiming[]): string {
+  const by = new Map<number, { tasks: number; wall: number; cpu: number | null }>();
+  for (const s of shares) {
+    const e = by.get(s.threadId) ?? { tasks: 0, wall: 0, cpu: 0 };
+    e.tasks += 1;
+    e.wall += s.wallSeconds;
+    e.cpu = e.cpu === null || s.cpuSeconds === null ? null : e.cpu + s.cpuSeconds;
+    by.set(s.threadId, e);
+  }
+  const rows = [...by.entries()].sort((a, b) => a[0] - b[0]);
+  return rows.map(([id, e]) => `thread ${id}: ${e.tasks} tasks, wall ${fmt(e.wall, 3)} s, CPU ${e.cpu === null ? "n/a" : fmt(e.cpu, 3) + " s"}`).join("; ");
+}
+
 /** The scipy reference and our runs on the same J and starts, alternated 3 times (medians). */
 async function compareScipy(pool: EnginePool): Promise<void> {
   const dir = mkdtempSync(join(tmpdir(), "eqb-bench-"));
@@ -110,12 +125,12 @@ async function compareScipy(pool: EnginePool): Promise<void> {
   let ref = scipyRun();
   const job = loadEquilibriaJob(["--couplings", join(dir, "J.npy"), "--starts", join(dir, "X0.npy"), "--mu", "1"], false);
   const net = rateNetworkFromMatrix(job.j, 1);
-  await runRateStartsParallel(pool, job.j, 1, 0, job.starts); // warm the workers
-  const times = { scipy: [] as number[], scipyCpu: [] as number[], serial: [] as number[], pool: [] as number[], serialCpu: [] as number[] };
+  let par = await runRateStartsParallel(pool, job.j, 1, 0, job.starts); // warm the workers
+  const shareLists = () => [] as ShareTiming[][];
+  const times = { scipy: [] as number[], scipyCpu: [] as number[], serial: [] as number[], pool: [] as number[], serialCpu: [] as number[], poolCpu: [] as number[], shares: shareLists() };
   const probeOff = { lyapunovAt: 0 };
   let serial = runStarts(net, job.starts);
-  let par = serial;
-  const timesOff = { serial: [] as number[], pool: [] as number[], serialCpu: [] as number[] };
+  const timesOff = { serial: [] as number[], pool: [] as number[], serialCpu: [] as number[], poolCpu: [] as number[], shares: shareLists() };
   for (let rep = 0; rep < 3; rep++) {
     ref = scipyRun();
     times.scipy.push(ref.wallSeconds);
@@ -127,13 +142,16 @@ async function compareScipy(pool: EnginePool): Promise<void> {
       into.serial.push(seconds(t0));
       into.serialCpu.push(cpuSince(c0));
       t0 = performance.now();
+      const p0 = process.cpuUsage();
       par = await runRateStartsParallel(pool, job.j, 1, 0, job.starts, opts);
       into.pool.push(seconds(t0));
+      into.poolCpu.push(cpuSince(p0));
+      into.shares.push(par.shareTimings);
     }
   }
   const s = median(times.scipy);
   const rep = (r: typeof serial) => JSON.stringify(reportOf(r, 0).runs);
-  console.log(`median of 3 alternated runs (N = 100, 32 starts, rtol 1e-6, atol 1e-9, t ≤ 200, still at 1e-5):`);
+  console.log(`median of 3 alternated runs (N = 100, 32 starts, rtol 1e-6, atol 1e-9, t ≤ 200, still at 1e-5; 1-min load average ${fmt(loadavg()[0])} on ${availableParallelism()} cores):`);
   const sc = median(times.scipyCpu);
   console.log(`scipy (${ref.source}): ${fmt(s, 3)} s (CPU ${fmt(sc, 3)} s), ${ref.evaluations} evaluations, runs ${JSON.stringify(ref.runs)}, ${ref.distinct} distinct`);
   for (const [label, t] of [["with Lyapunov probes", times], ["without probes (scipy's work)", timesOff]] as const) {
@@ -142,6 +160,7 @@ async function compareScipy(pool: EnginePool): Promise<void> {
       `ours ${label}: serial ${fmt(a, 3)} s (${fmt(s / a)}× scipy), ${pool.threads} threads ${fmt(b, 3)} s (${fmt(s / b)}× scipy); ` +
         `CPU serial ${fmt(ac, 3)} s (${fmt(sc / ac)}× scipy's CPU; ideal on ${pool.threads} cores ${fmt((pool.threads * sc) / ac)}×)`,
     );
+    console.log(`  pool, median run: CPU ${fmt(median(t.poolCpu), 3)} s in all threads; ${perThread(t.shares[t.pool.indexOf(b)])}`);
   }
   console.log(`ours: ${serial.counters.evaluations} evaluations, runs ${rep(serial)} (${rep(par)} on the pool), ${serial.equilibria.size} distinct`);
 }

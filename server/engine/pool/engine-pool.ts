@@ -5,7 +5,7 @@ import { validateCellInput } from "../cell/cell-input";
 import { mergeNetworks } from "../cell/merge";
 import type { NetworkOutput } from "../cell/run-network";
 import type { NetworkTask } from "./network.worker";
-import { joinRateShares, type RateStartsShare, type RateStartsTask } from "./starts-task";
+import { joinRateShares, type RateStartsShare, type RateStartsTask, type ShareTiming } from "./starts-task";
 import type { NetworkRun, RunStartsOptions } from "../equilibria/run-starts";
 
 export interface EnginePoolOptions {
@@ -87,7 +87,7 @@ export async function runCellParallel(pool: EnginePool, input: CellInput): Promi
  * @param input constant input I (number or length-N vector)
  * @param starts start states
  * @param options run options (as runStarts)
- * @returns the joined NetworkRun (no traces)
+ * @returns the joined NetworkRun (no traces), with each share's thread, wall and CPU seconds
  */
 export async function runRateStartsParallel(
   pool: EnginePool,
@@ -96,12 +96,12 @@ export async function runRateStartsParallel(
   input: Float64Array | number,
   starts: Float64Array[],
   options: RunStartsOptions = {},
-): Promise<NetworkRun> {
+): Promise<NetworkRun & { shareTimings: ShareTiming[] }> {
   const shares = Math.max(1, Math.min(pool.threads, starts.length));
   const tasks: RateStartsTask[] = Array.from({ length: shares }, (_, s) => {
     const indices = starts.map((_x, i) => i).filter((i) => i % shares === s);
     return { couplings, mu, input, starts: indices.map((i) => starts[i]), indices, options };
   });
   const results = await Promise.all(tasks.map((t) => pool.runStarts(t)));
-  return joinRateShares(tasks[0], results);
+  return { ...joinRateShares(tasks[0], results), shareTimings: results.map((r) => r.timing) };
 }

@@ -2,6 +2,8 @@ import { rateNetworkFromMatrix } from "../ensembles/rate/rate-network";
 import { analyseEquilibrium } from "../equilibria/equilibrium";
 import { EquilibriumSet } from "../equilibria/equilibrium-set";
 import { runStarts, type NetworkRun, type RunOutcome, type RunStartsOptions } from "../equilibria/run-starts";
+import { threadId } from "node:worker_threads";
+import { threadCpuSeconds } from "./thread-cpu";
 
 /** A share of the starts of one rate network dx/dt = −μx + J tanh(x) + I, for one worker. */
 export interface RateStartsTask {
@@ -21,10 +23,20 @@ export interface RateStartsShare {
   hits: number[];
   outcomes: RunOutcome[];
   counters: NetworkRun["counters"];
+  /** Where and how long the share ran: worker thread id, wall and thread-CPU seconds (null where unknown). */
+  timing: ShareTiming;
+}
+
+export interface ShareTiming {
+  threadId: number;
+  wallSeconds: number;
+  cpuSeconds: number | null;
 }
 
 /** Worker side: runs one share of the starts (runStarts). */
 export function runRateStarts(task: RateStartsTask): RateStartsShare {
+  const t0 = performance.now();
+  const c0 = threadCpuSeconds();
   const network = rateNetworkFromMatrix(task.couplings, task.mu, task.input);
   const run = runStarts(network, task.starts, task.options);
   return {
@@ -33,7 +45,13 @@ export function runRateStarts(task: RateStartsTask): RateStartsShare {
     hits: [...run.equilibria.hits],
     outcomes: run.outcomes.map((o) => ({ ...o, start: task.indices[o.start] })),
     counters: run.counters,
+    timing: { threadId, wallSeconds: (performance.now() - t0) / 1000, cpuSeconds: cpuSince(c0) },
   };
+}
+
+function cpuSince(c0: number | null): number | null {
+  const c1 = threadCpuSeconds();
+  return c0 === null || c1 === null ? null : c1 - c0;
 }
 
 /**
