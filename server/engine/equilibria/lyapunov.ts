@@ -1,6 +1,6 @@
 import type { OdeSystem } from "../integrate/types";
-import { integrate } from "../integrate/integrate";
-import { emptyCounters, addCounters, type BatchRhs, type IntegrationCounters } from "../integrate/types";
+import { Dopri5Batch, ROW } from "../integrate/dopri5-batch";
+import type { BatchRhs, IntegrationCounters } from "../integrate/types";
 
 export interface LyapunovOptions {
   /** Length of the probe window (time units). Default 40. */
@@ -49,8 +49,11 @@ function pairSystem(system: OdeSystem & Partial<BatchRhs>): OdeSystem {
  * (1980) 9: a companion y = x + d₀ v (v a fixed pseudo-random unit direction) is integrated
  * with x as one 2n-dimensional system (Dormand–Prince, same steps for both, so integration
  * errors largely cancel in y − x); every `interval` the separation d = ‖y − x‖₂ is measured,
- * ln(d/d₀) accumulated and y reset to x + d₀ (y − x)/d. The first `transient` share of
- * intervals is discarded while (y − x) aligns with the most unstable direction.
+ * ln(d/d₀) accumulated and y reset to x + d₀ (y − x)/d. One integration runs through the whole
+ * window: after a renormalisation it restarts from the new state with the step size it had
+ * (Dopri5Batch.restartRow), instead of choosing a fresh starting step each interval (measured:
+ * about a quarter fewer evaluations). The first `transient` share of intervals is discarded
+ * while (y − x) aligns with the most unstable direction.
  * @param system the ODE
  * @param x0 starting state (not modified)
  * @param options duration (40), interval (1), separation (1e-7), transient (0.2), rtol/atol
@@ -76,19 +79,29 @@ export function estimateLyapunov(system: OdeSystem & Partial<BatchRhs>, x0: Floa
   renormalise(z, n, d0);
   const intervals = Math.max(1, Math.round(duration / interval));
   const skip = Math.floor(intervals * (options.transient ?? 0.2));
-  const counters = emptyCounters();
+  const settings = { rtol: options.rtol ?? 1e-8, atol: options.atol ?? 1e-10, tMax: interval, maxSteps: 1e6 };
+  const batch = new Dopri5Batch(pair, 1, settings);
+  batch.add(0, z);
   let growth = 0;
+  const failed = () => ({ exponent: null, growth, time: 0, x: z.slice(0, n), counters: countersOf(batch), finite: false });
   for (let k = 0; k < intervals; k++) {
-    const r = integrate(pair, z, { tMax: interval, rtol: options.rtol ?? 1e-8, atol: options.atol ?? 1e-10, method: "dopri5" });
-    addCounters(counters, r.counters);
-    if (r.status !== "reached-tmax") return { exponent: null, growth, time: 0, x: z.slice(0, n), counters, finite: false };
-    z.set(r.x);
+    if (k > 0) {
+      settings.tMax = (k + 1) * interval;
+      batch.restartRow(0, z);
+    }
+    while (batch.status[0] === ROW.running) batch.attempt();
+    if (batch.status[0] !== ROW.tMax) return failed();
+    z.set(batch.row("x", 0));
     const d = renormalise(z, n, d0);
-    if (!(d > 0) || !Number.isFinite(d)) return { exponent: null, growth, time: 0, x: z.slice(0, n), counters, finite: false };
+    if (!(d > 0) || !Number.isFinite(d)) return failed();
     if (k >= skip) growth += Math.log(d / d0);
   }
   const time = (intervals - skip) * interval;
-  return { exponent: growth / time, growth, time, x: z.slice(0, n), counters, finite: true };
+  return { exponent: growth / time, growth, time, x: z.slice(0, n), counters: countersOf(batch), finite: true };
+}
+
+function countersOf(batch: Dopri5Batch): IntegrationCounters {
+  return { steps: batch.steps[0], accepted: batch.accepted[0], rejected: batch.rejected[0], evaluations: batch.evaluations[0] };
 }
 
 /** Rescales y − x to length d0; returns the length before rescaling. */

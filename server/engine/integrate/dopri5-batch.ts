@@ -124,6 +124,26 @@ export class Dopri5Batch {
     return r;
   }
 
+  /**
+   * Restarts row r from a new state x at its current time, keeping its step size and controller
+   * memory (for a caller that changes the state between steps, as the Lyapunov probe's
+   * renormalisation does): re-evaluates F(x) (1 evaluation) and marks the row running when F is
+   * finite. The row's tMax is the settings' current tMax (a caller may raise it between calls).
+   * @throws RangeError when r is not an active row or x has the wrong length
+   */
+  restartRow(r: number, x: Float64Array): void {
+    if (!Number.isSafeInteger(r) || r < 0 || r >= this.active) throw new RangeError(`r must be an active row, got ${r}`);
+    if (x.length !== this.n) throw new RangeError(`x must have length ${this.n}, got ${x.length}`);
+    const xr = this.row("x", r);
+    const fr = this.row("f", r);
+    xr.set(x);
+    this.system.rhs(xr, fr);
+    this.evaluations[r] += 1;
+    this.lastRejected[r] = 0;
+    this.acceptedNow[r] = 0;
+    this.status[r] = allFiniteRow(fr) ? ROW.running : ROW.nonFinite;
+  }
+
   /** Frees row r by moving the last active row into it. */
   remove(r: number): void {
     const last = --this.active;
