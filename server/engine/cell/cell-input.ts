@@ -4,7 +4,7 @@ import { getEnsemble } from "../ensembles/registry";
 export type { CellInput, CellResult, CellBudget, NetworkSummary } from "../../../shared/schemas/cell-result";
 
 /** Version of the engine's dynamics; part of every cell key (bump when results change). */
-export const ENGINE_VERSION = "dynamics-2";
+export const ENGINE_VERSION = "dynamics-3";
 
 function finitePositive(name: string, v: unknown): number {
   if (typeof v !== "number" || !Number.isFinite(v) || v <= 0) {

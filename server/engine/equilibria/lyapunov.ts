@@ -13,6 +13,8 @@ export interface LyapunovOptions {
   transient?: number;
   rtol?: number;
   atol?: number;
+  /** Called after each interval with the time since the probe began, x and F(x) (views valid during the call). */
+  onInterval?: (t: number, x: Float64Array, dxdt: Float64Array) => void;
 }
 
 export interface LyapunovEstimate {
@@ -22,6 +24,8 @@ export interface LyapunovEstimate {
   growth: number;
   /** Time over which the exponent was measured. */
   time: number;
+  /** Whole window integrated (transient included): x is the state at x0's time + elapsed. */
+  elapsed: number;
   /** State at the end of the probe. */
   x: Float64Array;
   counters: IntegrationCounters;
@@ -83,7 +87,7 @@ export function estimateLyapunov(system: OdeSystem & Partial<BatchRhs>, x0: Floa
   const batch = new Dopri5Batch(pair, 1, settings);
   batch.add(0, z);
   let growth = 0;
-  const failed = () => ({ exponent: null, growth, time: 0, x: z.slice(0, n), counters: countersOf(batch), finite: false });
+  const failed = () => ({ exponent: null, growth, time: 0, elapsed: 0, x: z.slice(0, n), counters: countersOf(batch), finite: false });
   for (let k = 0; k < intervals; k++) {
     if (k > 0) {
       settings.tMax = (k + 1) * interval;
@@ -92,12 +96,13 @@ export function estimateLyapunov(system: OdeSystem & Partial<BatchRhs>, x0: Floa
     while (batch.status[0] === ROW.running) batch.attempt();
     if (batch.status[0] !== ROW.tMax) return failed();
     z.set(batch.row("x", 0));
+    options.onInterval?.(settings.tMax, z.subarray(0, n), batch.row("f", 0).subarray(0, n));
     const d = renormalise(z, n, d0);
     if (!(d > 0) || !Number.isFinite(d)) return failed();
     if (k >= skip) growth += Math.log(d / d0);
   }
   const time = (intervals - skip) * interval;
-  return { exponent: growth / time, growth, time, x: z.slice(0, n), counters: countersOf(batch), finite: true };
+  return { exponent: growth / time, growth, time, elapsed: intervals * interval, x: z.slice(0, n), counters: countersOf(batch), finite: true };
 }
 
 function countersOf(batch: Dopri5Batch): IntegrationCounters {

@@ -6,6 +6,7 @@ import { emptyCounters, addCounters, type BatchRhs, type OdeSystem } from "../in
 import { normInf, distInf } from "../linalg/vector";
 import { RunHistory } from "./run-history";
 import type { TraceRecorder } from "./trace";
+import type { RunJump } from "../integrate/integrate-many";
 
 /** Why the monitor stopped a run, or null while it runs. */
 export type RunStop = "still" | "basin" | "escaping" | "irregular" | null;
@@ -31,6 +32,7 @@ export class RunMonitor {
   private probed = false;
   private probeAt: number;
   private speedAtHalf = -1;
+  private jump: RunJump | null = null;
 
   constructor(
     private readonly network: Network,
@@ -39,6 +41,12 @@ export class RunMonitor {
     private readonly trace: TraceRecorder | null = null,
     /** The system the Lyapunov probe integrates (the network, or its batched form). */
     private readonly probeSystem: OdeSystem & Partial<BatchRhs> = network,
+    /**
+     * True when the integrator can move the run to the probe's end state (integrateMany's
+     * RunJump): the probe's own trajectory of x then replaces the window instead of being
+     * integrated twice. Default false (the run continues from where the probe began).
+     */
+    private readonly jumps = false,
   ) {
     this.history = new RunHistory(network.n, settings.tMax);
     this.probeAt = settings.lyapunovStart ?? Infinity;
@@ -70,7 +78,7 @@ export class RunMonitor {
       this.speedAtHalf = speed;
       return false;
     }
-    return this.probe(x);
+    return this.probe(t, x);
   }
 
   private halt(reason: Exclude<RunStop, null>): boolean {
@@ -90,21 +98,43 @@ export class RunMonitor {
     return false;
   }
 
-  /** Runs the Lyapunov probe from x (the run itself continues from x if it is not irregular). */
-  private probe(x: Float64Array): boolean {
+  /**
+   * The move a jumping integrator should make after the step just observed (the probe's end
+   * state and window), once; null otherwise.
+   */
+  takeJump(): RunJump | null {
+    const j = this.jump;
+    this.jump = null;
+    return j;
+  }
+
+  /**
+   * Runs the Lyapunov probe from x at time t. If it is not irregular the run continues from x,
+   * or — when the integrator jumps and the window ends before tMax — from the probe's end
+   * state, the window's interval ends having been recorded in the history and trace.
+   */
+  private probe(t: number, x: Float64Array): boolean {
     this.probed = true;
+    const jump = this.jumps && t + this.settings.lyapunovDuration < this.settings.tMax;
     const est = estimateLyapunov(this.probeSystem, x, {
       duration: this.settings.lyapunovDuration,
       interval: 2 / this.network.mu,
       rtol: this.settings.rtol,
       atol: this.settings.atol,
+      onInterval: jump ? (dt, xi, fi) => this.recordInterval(t + dt, xi, fi) : undefined,
     });
     addCounters(this.probeCounters, est.counters);
     if (est.exponent === null) return false;
     this.lyapunov = est.exponent;
     this.lyapunovGrowth = est.growth;
     if (est.exponent > this.settings.lyapunovThreshold && est.growth > MIN_GROWTH) return this.halt("irregular");
+    if (jump) this.jump = { x: est.x, dt: est.elapsed };
     return false;
+  }
+
+  private recordInterval(t: number, x: Float64Array, dxdt: Float64Array): void {
+    this.trace?.record(t, x);
+    this.history.record(t, x, normInf(dxdt));
   }
 
   /** True when the probe ran and its exponent is within ±lyapunovThreshold of 0 (neutral, as on a cycle or torus). */

@@ -102,7 +102,7 @@ export function runStarts(network: Network, starts: Float64Array[], options: Run
       starts.length,
       {
         start: (i) => starts[i],
-        onStep: (i, t, x, f) => monitors[i].observe(t, x, f),
+        onStep: (i, t, x, f) => monitors[i].observe(t, x, f) || monitors[i].takeJump() || false,
         onEnd: (i, r) => ctx.finish(i, monitors[i], r),
       },
       { ...settings, maxSteps: 1e6, capacity: settings.batch },
@@ -136,7 +136,7 @@ class RunContext {
       trace = new TraceRecorder(i, units, x0, this.options.traceMaxPoints ?? 100);
       this.traces.set(i, trace);
     }
-    return new RunMonitor(this.network, this.settings, this.set, trace, this.system);
+    return new RunMonitor(this.network, this.settings, this.set, trace, this.system, this.settings.method === "dopri5");
   }
 
   finish(i: number, m: RunMonitor, r: IntegrationResult): void {

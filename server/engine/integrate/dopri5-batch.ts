@@ -144,6 +144,19 @@ export class Dopri5Batch {
     this.status[r] = allFiniteRow(fr) ? ROW.running : ROW.nonFinite;
   }
 
+  /**
+   * Moves row r forward by dt to a state x computed elsewhere (the Lyapunov probe's end state):
+   * restartRow, then t += dt; a row that reaches tMax so ends there (status tMax).
+   * @throws RangeError as restartRow, or when dt is not positive and finite
+   */
+  jumpRow(r: number, x: Float64Array, dt: number): void {
+    if (!(dt > 0) || !Number.isFinite(dt)) throw new RangeError(`dt must be positive and finite, got ${dt}`);
+    this.restartRow(r, x);
+    const tMax = this.settings.tMax;
+    this.t[r] = this.t[r] + dt >= tMax ? tMax : this.t[r] + dt;
+    if (this.t[r] >= tMax && this.status[r] === ROW.running) this.status[r] = ROW.tMax;
+  }
+
   /** Frees row r by moving the last active row into it. */
   remove(r: number): void {
     const last = --this.active;

@@ -13,12 +13,21 @@ export interface IntegrateManyOptions extends Dopri5Settings {
   capacity: number;
 }
 
+/** Move a run to state x at time t + dt (its step size kept; Dopri5Batch.jumpRow). */
+export interface RunJump {
+  x: Float64Array;
+  dt: number;
+}
+
 /** Callbacks of integrateMany, each given the run's id (0 … count−1). */
 export interface ManyRunCallbacks {
   /** Start state of run id (read once, when the run enters the batch). */
   start(id: number): Float64Array;
-  /** After each accepted step of run id; return true to stop it. Views valid during the call. */
-  onStep?(id: number, t: number, x: Float64Array, dxdt: Float64Array): boolean | void;
+  /**
+   * After each accepted step of run id; return true to stop it, or a RunJump to move it to a
+   * state computed elsewhere. Views valid during the call.
+   */
+  onStep?(id: number, t: number, x: Float64Array, dxdt: Float64Array): boolean | void | RunJump;
   /** When run id ends, with its final state and counters. */
   onEnd(id: number, result: IntegrationResult): void;
 }
@@ -56,7 +65,9 @@ export function integrateMany(
     batch.attempt();
     for (let r = 0; r < batch.active; r++) {
       if (!batch.acceptedNow[r] || !callbacks.onStep) continue;
-      if (callbacks.onStep(batch.ids[r], batch.t[r], batch.row("x", r), batch.row("f", r)) === true) stopped[r] = 1;
+      const next = callbacks.onStep(batch.ids[r], batch.t[r], batch.row("x", r), batch.row("f", r));
+      if (next === true) stopped[r] = 1;
+      else if (next) batch.jumpRow(r, next.x, next.dt);
     }
     for (let r = batch.active - 1; r >= 0; r--) {
       if (!stopped[r] && batch.status[r] === ROW.running) continue;

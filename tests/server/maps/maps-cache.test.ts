@@ -110,7 +110,7 @@ describe("reads of a finished map", () => {
     expect(mapExportSchema.safeParse(json.body).success).toBe(true);
     const again = createMapSchema.safeParse(json.body.manifest);
     expect(again.success).toBe(true);
-    expect(json.body).toMatchObject({ engineVersion: "dynamics-2", ensembleVersion: "1" });
+    expect(json.body).toMatchObject({ engineVersion: "dynamics-3", ensembleVersion: "1" });
     expect(json.body.cells).toHaveLength(9);
     // Recreating from the manifest hits the cache for every cell.
     const replay = await me.client.post("/api/maps", { ...json.body.manifest, estimateOnly: true });
