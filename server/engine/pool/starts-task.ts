@@ -1,5 +1,5 @@
 import { rateNetworkFromMatrix } from "../ensembles/rate/rate-network";
-import { analyseEquilibrium } from "../equilibria/equilibrium";
+import type { Equilibrium } from "../equilibria/equilibrium";
 import { EquilibriumSet } from "../equilibria/equilibrium-set";
 import { runStarts, type NetworkRun, type RunOutcome, type RunStartsOptions } from "../equilibria/run-starts";
 import { threadId } from "node:worker_threads";
@@ -16,10 +16,9 @@ export interface RateStartsTask {
   options: RunStartsOptions;
 }
 
-/** What a share sends back: its equilibria (points, hits) and outcomes. */
+/** What a share sends back: its equilibria (spectra included, plain data) with hits, and outcomes. */
 export interface RateStartsShare {
-  points: Float64Array[];
-  residuals: number[];
+  equilibria: Equilibrium[];
   hits: number[];
   outcomes: RunOutcome[];
   counters: NetworkRun["counters"];
@@ -40,8 +39,7 @@ export function runRateStarts(task: RateStartsTask): RateStartsShare {
   const network = rateNetworkFromMatrix(task.couplings, task.mu, task.input);
   const run = runStarts(network, task.starts, task.options);
   return {
-    points: run.equilibria.items.map((e) => e.x),
-    residuals: run.equilibria.items.map((e) => e.residual),
+    equilibria: run.equilibria.items,
     hits: [...run.equilibria.hits],
     outcomes: run.outcomes.map((o) => ({ ...o, start: task.indices[o.start] })),
     counters: run.counters,
@@ -57,20 +55,20 @@ function cpuSince(c0: number | null): number | null {
 /**
  * Joins the shares of one network's starts, in share order: equilibria are merged by the same
  * relative distance as within a share (first occurrence kept, hits added), outcomes put back in
- * start order, spectra recomputed once per distinct equilibrium on the calling side.
- * @param task any task of the network (for J, μ, input and mergeTol)
+ * start order; each equilibrium keeps the spectrum its worker computed (the same bits as
+ * recomputing it here, without the main thread's eigenvalue work).
+ * @param task any task of the network (for mergeTol)
  * @param shares the shares in start order
  * @returns the combined NetworkRun (no traces)
  */
 export function joinRateShares(task: RateStartsTask, shares: RateStartsShare[]): NetworkRun {
-  const network = rateNetworkFromMatrix(task.couplings, task.mu, task.input);
   const set = new EquilibriumSet(task.options.mergeTol);
   const outcomes: RunOutcome[] = [];
   const counters = { steps: 0, accepted: 0, rejected: 0, evaluations: 0, newtonIterations: 0, refinements: 0, probeEvaluations: 0 };
   for (const share of shares) {
-    const map = share.points.map((x, i) => {
-      let j = set.find(x);
-      if (j < 0) j = set.add(analyseEquilibrium(network, x, share.residuals[i]));
+    const map = share.equilibria.map((e, i) => {
+      let j = set.find(e.x);
+      if (j < 0) j = set.add(e);
       set.hits[j] += share.hits[i];
       return j;
     });
