@@ -190,6 +190,7 @@ async function main(): Promise<void> {
   const threads = ti >= 0 ? Number(argv[ti + 1]) : availableParallelism();
   const pool = createEnginePool({ threads });
   try {
+    await pool.warm(); // thread start-up, tsx and JIT kept out of every timed region, as in a long-lived worker
     if (argv.includes("--compare-scipy")) await compareScipy(pool);
     else if (argv.includes("--compare-methods")) compareMethods();
     else if (argv.includes("--couplings")) await onFiles(argv, pool);

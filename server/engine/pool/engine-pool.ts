@@ -5,6 +5,7 @@ import { validateCellInput } from "../cell/cell-input";
 import { mergeNetworks } from "../cell/merge";
 import type { NetworkOutput } from "../cell/run-network";
 import type { NetworkTask } from "./network.worker";
+import type { WarmTask } from "./warm-task";
 import { joinRateShares, type RateStartsShare, type RateStartsTask, type ShareTiming } from "./starts-task";
 import type { NetworkRun, RunStartsOptions } from "../equilibria/run-starts";
 
@@ -20,6 +21,13 @@ export interface EnginePool {
   run(task: NetworkTask): Promise<NetworkOutput>;
   /** Runs one share of a rate network's starts in a worker. */
   runStarts(task: RateStartsTask): Promise<RateStartsShare>;
+  /**
+   * Starts every worker thread and runs one small engine task on each (warmWorker), so thread
+   * start-up, module loading (tsx) and JIT compilation are paid before timed work: a long-lived
+   * process calls it once after createEnginePool. Resolves to the thread ids warmed (one per
+   * thread unless a thread took more than 10 s to start).
+   */
+  warm(): Promise<number[]>;
   /** Stops the workers. */
   close(): Promise<void>;
 }
@@ -53,6 +61,11 @@ export function createEnginePool(options: EnginePoolOptions = {}): EnginePool {
     threads,
     run: (task) => piscina.run(task) as Promise<NetworkOutput>,
     runStarts: (task) => piscina.run(task, { name: "runRateStarts" }) as Promise<RateStartsShare>,
+    warm: async () => {
+      const task: WarmTask = { started: new Int32Array(new SharedArrayBuffer(4)), of: threads };
+      const done = await Promise.all(Array.from({ length: threads }, () => piscina.run(task, { name: "warmWorker" })));
+      return (done as { threadId: number }[]).map((d) => d.threadId);
+    },
     close: () => piscina.destroy(),
   };
 }

@@ -86,6 +86,11 @@ describe("exhaustive cells and the pool", () => {
     seed: 7,
   };
 
+  it("warms each of its threads once", async () => {
+    const ids = await pool.warm();
+    expect(new Set(ids).size).toBe(2);
+  });
+
   it("runCellParallel over two threads equals runCell", async () => {
     const serial = runCell(input);
     const parallel = await runCellParallel(pool, input);
