@@ -12,6 +12,14 @@ export interface SummaryFilter {
   theoryKey?: string;
 }
 
+/** One position's summary with its cell key and the engine version of its stored result. */
+export interface StoredCellSummary {
+  summary: CellSummary;
+  cellKey: string;
+  /** `engineVersion` of the cache row under the position's key (null while none is stored). */
+  engineVersion: string | null;
+}
+
 function where(mapId: string, f: SummaryFilter): SQL | undefined {
   const parts: SQL[] = [eq(mapCells.mapId, mapId)];
   if (f.i !== undefined) parts.push(eq(mapCells.i, f.i));
@@ -21,28 +29,31 @@ function where(mapId: string, f: SummaryFilter): SQL | undefined {
 }
 
 /**
- * CellSummary of map positions (summarizeCell): the dynamics part from the stored result's
- * aggregate (only that leaves the database) once
- * the position is done, the theory part from its τ row once that row is stored (column i, as
- * the row lists every μ of the map in order). Ordered by j, then i.
+ * The one way to build CellSummaries of a map's positions (summarizeCell), for the grid, the
+ * exports and live `cell` events. Only the stored result's aggregate and column i of the τ
+ * row's theory (the row lists every μ of the map in order) leave the database. The dynamics
+ * part is filled once the position is done, the theory part once its row is stored. Ordered by
+ * j, then i.
  */
-export async function listCellSummaries(db: Executor, mapId: string, filter: SummaryFilter = {}): Promise<CellSummary[]> {
+export async function listCellSummaries(db: Executor, mapId: string, filter: SummaryFilter = {}): Promise<StoredCellSummary[]> {
   const rows = await db
     .select({
       i: mapCells.i, j: mapCells.j, mu: mapCells.mu, tau: mapCells.tau, state: mapCells.state,
-      fromCache: mapCells.fromCache, budget: maps.budget, columns: theoryRows.columns,
+      fromCache: mapCells.fromCache, cellKey: mapCells.cellKey, budget: maps.budget,
+      theory: sql<TheoryColumns | null>`${theoryRows.columns} -> ${mapCells.i}`,
       aggregate: sql<CellResult["aggregate"] | null>`${cells.result} -> 'aggregate'`,
+      engineVersion: sql<string | null>`${cells.result} ->> 'engineVersion'`,
     })
     .from(mapCells)
     .innerJoin(maps, eq(maps.id, mapCells.mapId))
-    .leftJoin(cells, and(eq(cells.key, mapCells.cellKey), eq(mapCells.state, "done")))
+    .leftJoin(cells, eq(cells.key, mapCells.cellKey))
     .leftJoin(theoryRows, eq(theoryRows.key, mapCells.theoryKey))
     .where(where(mapId, filter))
     .orderBy(asc(mapCells.j), asc(mapCells.i));
   return rows.map((r) => {
     const budget = r.budget as { networks: number; starts: number };
-    const theory = (r.columns as TheoryColumns[] | null)?.[r.i] ?? null;
     const position = { i: r.i, j: r.j, mu: r.mu, tau: r.tau, state: r.state, fromCache: r.fromCache, networks: budget.networks, starts: budget.starts };
-    return summarizeCell(position, r.aggregate ? { aggregate: r.aggregate } : null, theory);
+    const aggregate = r.state === "done" ? r.aggregate : null;
+    return { summary: summarizeCell(position, aggregate ? { aggregate } : null, r.theory), cellKey: r.cellKey, engineVersion: r.engineVersion };
   });
 }

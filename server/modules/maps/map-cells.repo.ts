@@ -1,4 +1,4 @@
-import { and, asc, count, eq, gt, inArray, sql } from "drizzle-orm";
+import { and, count, eq, gt, inArray } from "drizzle-orm";
 import type { CellResult } from "../../../shared/schemas/cell-result";
 import type { TheoryColumns } from "../../../shared/schemas/theory";
 import type { Executor } from "../../db/client";
@@ -31,30 +31,6 @@ export function storedCellKeys(db: Executor, keys: string[]): Promise<Set<string
 /** Which of these theory keys are stored. */
 export function storedTheoryKeys(db: Executor, keys: string[]): Promise<Set<string>> {
   return foundKeys(keys, (part) => db.select({ key: theoryRows.key }).from(theoryRows).where(inArray(theoryRows.key, part)));
-}
-
-/**
- * Every position of a map with the aggregate of its stored result (only the aggregate: full
- * results stay in the database), ordered by j then i.
- */
-export function listPositions(db: Executor, mapId: string) {
-  return db
-    .select({
-      i: mapCells.i,
-      j: mapCells.j,
-      mu: mapCells.mu,
-      tau: mapCells.tau,
-      state: mapCells.state,
-      fromCache: mapCells.fromCache,
-      cellKey: mapCells.cellKey,
-      theoryKey: mapCells.theoryKey,
-      aggregate: sql<CellResult["aggregate"] | null>`${cells.result} -> 'aggregate'`,
-      engineVersion: sql<string | null>`${cells.result} ->> 'engineVersion'`,
-    })
-    .from(mapCells)
-    .leftJoin(cells, eq(cells.key, mapCells.cellKey))
-    .where(eq(mapCells.mapId, mapId))
-    .orderBy(asc(mapCells.j), asc(mapCells.i));
 }
 
 /** One position with its full stored result (null while not stored). */

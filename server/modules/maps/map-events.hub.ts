@@ -3,7 +3,7 @@ import type { CellSummary } from "../../../shared/maps/cell-summary";
 import type { MapStatusEvent } from "../../../shared/maps/map-events";
 import type { Db } from "../../db/client";
 import type { Logger } from "../../lib/logger";
-import { listCellSummaries } from "../cells/cell-summaries.repo";
+import { listCellSummaries, type SummaryFilter } from "../cells/cell-summaries.repo";
 import { MAP_EVENTS_CHANNEL, mapNotificationSchema, type MapNotification } from "../cells/map-notify.repo";
 import { readMapProgress, type MapProgress } from "../cells/map-progress.repo";
 
@@ -197,9 +197,9 @@ export class MapEventsHub {
     for (const listener of this.topics.get(mapId)?.listeners ?? []) listener(event);
   }
 
-  private async sendCells(mapId: string, filter: { i?: number; j?: number; theoryKey?: string }): Promise<void> {
+  private async sendCells(mapId: string, filter: SummaryFilter): Promise<void> {
     if (!this.topics.has(mapId)) return;
-    for (const summary of await listCellSummaries(this.deps.db, mapId, filter)) this.emit(mapId, { type: "cell", data: summary });
+    for (const { summary } of await listCellSummaries(this.deps.db, mapId, filter)) this.emit(mapId, { type: "cell", data: summary });
   }
 
   private resyncAll(): void {

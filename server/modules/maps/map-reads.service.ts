@@ -9,6 +9,7 @@ import type { Actor } from "../../lib/actor";
 import { getEnsemble } from "../../engine/ensembles/registry";
 import { InvalidError, NotFoundError } from "../../lib/errors";
 import { cellInputFor, mapSpecFromRow } from "./cell-key";
+import { listCellSummaries } from "../cells/cell-summaries.repo";
 import * as cellsRepo from "./map-cells.repo";
 import { mapCsv } from "./maps.export";
 import type { MapRecord } from "./maps.repo";
@@ -37,16 +38,9 @@ export class MapReadsService {
    * and the engine version of the stored results (the running engine's when none is stored yet).
    */
   private async summaries(rec: MapRecord): Promise<{ engineVersion: string; cells: Array<CellSummary & { cellKey: string }> }> {
-    const positions = await cellsRepo.listPositions(this.deps.db, rec.id);
-    const engineVersion = positions.find((p) => p.engineVersion)?.engineVersion ?? ENGINE_VERSION;
-    const theory = await cellsRepo.findTheoryRows(this.deps.db, positions.map((p) => p.theoryKey));
-    const counts = budgetCounts(rec);
-    const cells = positions.map((p) => {
-      const aggregate = p.state === "done" ? p.aggregate : null;
-      const pos = { i: p.i, j: p.j, mu: p.mu, tau: p.tau, state: p.state, fromCache: p.fromCache, ...counts };
-      return { ...summarizeCell(pos, aggregate ? { aggregate } : null, theoryAt(theory, p.theoryKey, p.i)), cellKey: p.cellKey };
-    });
-    return { engineVersion, cells };
+    const rows = await listCellSummaries(this.deps.db, rec.id);
+    const engineVersion = rows.find((r) => r.engineVersion)?.engineVersion ?? ENGINE_VERSION;
+    return { engineVersion, cells: rows.map((r) => ({ ...r.summary, cellKey: r.cellKey })) };
   }
 
   /** One layer over the grid: values[j][i], with every position's summary. */
@@ -55,7 +49,7 @@ export class MapReadsService {
     const mu = axisPoints(record.muAxis as Parameters<typeof axisPoints>[0]);
     const tau = axisPoints(record.tauAxis as Parameters<typeof axisPoints>[0]);
     const values: (number | null)[][] = tau.map(() => mu.map(() => null));
-    const cells = (await this.summaries(record)).cells.map(({ cellKey: _key, ...summary }) => summary);
+    const cells = (await listCellSummaries(this.deps.db, record.id)).map((r) => r.summary);
     for (const c of cells) values[c.j][c.i] = layerValue(layer, c);
     return { layer, mu, tau, values, cells };
   }
