@@ -1,7 +1,6 @@
 import { threadId } from "node:worker_threads";
-import { createRng } from "../random/rng";
-import { rateNetworkFromMatrix } from "../ensembles/rate/rate-network";
-import { runStarts } from "../equilibria/run-starts";
+import { validateCellInput } from "../cell/cell-input";
+import { runNetwork } from "../cell/run-network";
 
 /** One warm-up task per worker thread: a shared counter lets each task wait for the others. */
 export interface WarmTask {
@@ -11,16 +10,22 @@ export interface WarmTask {
   of: number;
 }
 
-const N = 48;
-const STARTS = 8;
 const WAIT_MS = 10_000;
+/** A small rate cell (N = 48, 8 starts, t ≤ 60): draws, integration with one probe per run, Newton, spectra, summary. */
+const WARM_INPUT = {
+  ensemble: "rate",
+  params: { N: 48, g: 2 },
+  mu: 1,
+  tau: 0.5,
+  seed: 20261201,
+  budget: { networks: 1, starts: 8, tMax: 60, rtol: 1e-6, atol: 1e-9 },
+};
 
 /**
  * Worker side of EnginePool.warm: registers on the shared counter and waits (Atomics.wait, at
  * most 10 s) until all `of` tasks have started — so each lands on its own thread, none sitting
- * idle while another thread takes two — then integrates a small rate network (N = 48, 8 starts,
- * t ≤ 60, one Lyapunov probe each) so the engine's code is compiled and optimised before timed
- * work arrives.
+ * idle while another thread takes two — then computes network 0 of a small rate cell (runNetwork:
+ * N = 48, 8 starts, t ≤ 60) so the engine's code is compiled and optimised before timed work.
  * @param task the shared counter and the number of tasks
  * @returns the worker's thread id and the number of runs made
  */
@@ -31,8 +36,6 @@ export function warmWorker(task: WarmTask): { threadId: number; runs: number } {
   for (let seen = now; seen < task.of && Date.now() < until; seen = Atomics.load(task.started, 0)) {
     Atomics.wait(task.started, 0, seen, until - Date.now());
   }
-  const rng = createRng(20261201);
-  const j = Float64Array.from({ length: N * N }, () => (2 * rng.normal()) / Math.sqrt(N));
-  const starts = Array.from({ length: STARTS }, () => Float64Array.from({ length: N }, () => rng.normal()));
-  return { threadId, runs: runStarts(rateNetworkFromMatrix(j, 1), starts, { tMax: 60 }).outcomes.length };
+  const out = runNetwork(validateCellInput(WARM_INPUT), 0);
+  return { threadId, runs: Object.values(out.summary.runs).reduce((a, b) => a + b, 0) };
 }
