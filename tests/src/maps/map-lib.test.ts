@@ -6,12 +6,12 @@ import { mStable } from "../../../shared/theory";
 import { applyCellEvent, applyProgressEvent } from "../../../src/features/maps/hooks/use-map-events";
 import { layerScale } from "../../../src/features/maps/lib/color-scale";
 import { matchesCriteria } from "../../../src/features/maps/lib/filters";
-import { formatDuration, formatNumber } from "../../../src/features/maps/lib/format-number";
+import { formatDuration, formatNumber } from "../../../src/lib/format-number";
 import { buildGrid, layerValues, upsertCell } from "../../../src/features/maps/lib/grid-model";
 import { hexToOklab, oklabToHex, rampColors } from "../../../src/features/maps/lib/oklab";
 import { overlayCurves } from "../../../src/features/maps/lib/overlay-curves";
 import { KILN, SADDLE, TIDE } from "../../../src/features/maps/lib/palettes";
-import { axisScale, band } from "../../../src/features/maps/lib/plot-geometry";
+import { axisScale, band } from "../../../src/lib/axis-scale";
 import { bmpDataUrl } from "../../../src/features/maps/lib/thumbnail";
 import { wrapParts } from "../../../src/features/maps/lib/wrap-text";
 

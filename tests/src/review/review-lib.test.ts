@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { manifestOf } from "../../../src/features/review/components/import-form";
 import { divergingColor, shareColor } from "../../../src/features/review/lib/colors";
-import { fmt, fmtP } from "../../../src/features/review/lib/format";
-import { gridScale } from "../../../src/features/review/lib/plot-scale";
+import { fmtP } from "../../../src/features/review/lib/format";
+import { axisScale, band, pickEvenly } from "../../../src/lib/axis-scale";
+import { formatNumber } from "../../../src/lib/format-number";
 import { compareCandidates } from "../../../src/app/routes/review/review-actions";
 import type { MapView } from "../../../shared/schemas/maps";
 
@@ -24,11 +25,13 @@ describe("manifestOf", () => {
 
 describe("grid geometry and colours", () => {
   it("puts axis points at band centres, linear and log", () => {
-    const lin = gridScale({ min: 0, max: 1, steps: 3, scale: "linear" }, [0, 300]);
+    const lin = axisScale({ min: 0, max: 1, steps: 3, scale: "linear" }, [0, 300]);
     expect([lin(0), lin(0.5), lin(1)]).toEqual([50, 150, 250]);
-    expect(lin.band(1)).toEqual([100, 200]);
-    const log = gridScale({ min: 1, max: 100, steps: 3, scale: "log" }, [0, 300]);
+    expect(band(1, 3, [0, 300])).toEqual({ start: 100, size: 100 });
+    expect(band(1, 3, [300, 0])).toEqual({ start: 100, size: 100 }); // a y axis runs backwards
+    const log = axisScale({ min: 1, max: 100, steps: 3, scale: "log" }, [0, 300]);
     expect(log(10)).toBeCloseTo(150, 10);
+    expect(pickEvenly([0, 1, 2, 3, 4, 5, 6, 7, 8], 5)).toEqual([0, 2, 4, 6, 8]);
   });
   it("colours: neutral at zero, the ends of the ramps at the extremes", () => {
     expect(divergingColor(0, 1)).toBe("#f4efe4");
@@ -38,8 +41,8 @@ describe("grid geometry and colours", () => {
     expect(shareColor(1)).toBe("#1f4e6b");
   });
   it("formats numbers and p-values", () => {
-    expect(fmt(-0.38412)).toBe("−0.384");
-    expect(fmt(null)).toBe("—");
+    expect(formatNumber(-0.38412)).toBe("−0.384");
+    expect(formatNumber(null)).toBe("—");
     expect(fmtP(0.0004)).toBe("p < 0.001");
     expect(fmtP(0.0346)).toBe("p = 0.035");
   });

@@ -5,7 +5,7 @@ import { PageHeader } from "../../../components/ui/page-header";
 import { LoadingBlock } from "../../../components/ui/spinner";
 import { mapQueries } from "../../../features/maps/api/map-queries";
 import { CellDetailView } from "../../../features/maps/components/cell-detail/cell-detail-view";
-import { formatNumber } from "../../../features/maps/lib/format-number";
+import { formatNumber } from "../../../lib/format-number";
 
 function position(params: Record<string, string | undefined>) {
   return { i: Number(params.i ?? -1), j: Number(params.j ?? -1) };

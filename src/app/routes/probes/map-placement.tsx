@@ -12,7 +12,7 @@ import { MapFigure } from "../../../features/maps/components/heatmap/map-figure"
 import { LayerPicker } from "../../../features/maps/components/layer-picker";
 import { useElementWidth } from "../../../features/maps/hooks/use-element-width";
 import { buildGrid } from "../../../features/maps/lib/grid-model";
-import { num } from "../../../features/probe/lib/format";
+import { formatNumber } from "../../../lib/format-number";
 import { placeOnMap, type Placement } from "../../../features/probe/lib/placement";
 
 const NO_CRITERIA: never[] = [];
@@ -63,7 +63,7 @@ function FigureWithMarker({ map, grid, layer, placement }: { map: MapView; grid:
     if (box.current) setMarker(measureMarker(box.current, map, placement));
   }, [width, map, placement, layer, model]);
   const inside = placement.insideMu && placement.insideTau;
-  const label = `The probe at μ/g = ${num(placement.mu / Number(map.settings.g))}, τ = ${num(placement.tau)}`;
+  const label = `The probe at μ/g = ${formatNumber(placement.mu / Number(map.settings.g))}, τ = ${formatNumber(placement.tau)}`;
   return (
     <div ref={box} className="relative w-full">
       <MapFigure map={map} grid={model} layerId={layer} criteria={NO_CRITERIA} curves={NO_CURVES} width={width} />
@@ -105,7 +105,7 @@ function Placed({ probe, map }: { probe: ProbeView; map: MapView }) {
           <FigureWithMarker map={map} grid={grid.data} layer={layer} placement={placement} />
         </div>
         <p className="text-xs text-ink-soft">
-          μ/ĝ = {num(probe.mu / probe.stats.g!.estimate)} and τ̂ = {num(placement.tau)} put the matrix at μ = {num(placement.mu)} on this map (g = {String(map.settings.g)}): the rate network depends on μ and g only through μ/g.
+          μ/ĝ = {formatNumber(probe.mu / probe.stats.g!.estimate)} and τ̂ = {formatNumber(placement.tau)} put the matrix at μ = {formatNumber(placement.mu)} on this map (g = {String(map.settings.g)}): the rate network depends on μ and g only through μ/g.
         </p>
         {notes.map((n) => (
           <p key={n} className="text-xs text-ember-700">{n}</p>
@@ -140,7 +140,7 @@ export function MapPlacement({ probe }: { probe: ProbeView }) {
   if (rateMaps.length === 0) {
     return (
       <p className="text-sm text-ink-soft">
-        No rate-network map to place it on yet. <Link to="/maps/new" className="text-well-700 hover:underline">Create one</Link> over μ and τ around μ/g = {probe.stats.g ? num(probe.mu / probe.stats.g.estimate) : "—"}.
+        No rate-network map to place it on yet. <Link to="/maps/new" className="text-well-700 hover:underline">Create one</Link> over μ and τ around μ/g = {probe.stats.g ? formatNumber(probe.mu / probe.stats.g.estimate) : "—"}.
       </p>
     );
   }

@@ -5,7 +5,7 @@ import type { MapView } from "../../../../shared/schemas/maps";
 import { Button, buttonClass } from "../../../components/ui/button";
 import { LoadingBlock } from "../../../components/ui/spinner";
 import { mapKeys, mapQueries } from "../../../features/maps/api/map-queries";
-import { Modal } from "../../../features/maps/components/modal";
+import { Modal } from "../../../components/ui/modal";
 import { useReplicateMap } from "../../../features/review/api/review-mutations";
 import { ComparePicker, type CompareCandidate } from "../../../features/review/components/compare-picker";
 import { ReplicateForm } from "../../../features/review/components/replicate-form";

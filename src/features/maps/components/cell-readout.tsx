@@ -2,7 +2,7 @@ import type { ReactNode } from "react";
 import type { CellSummary } from "../../../../shared/maps/cell-summary";
 import type { IntervalJson } from "../../../../shared/schemas/cell-result";
 import { REGIME_LABELS } from "../lib/color-scale";
-import { formatBounds, formatNumber, formatShare } from "../lib/format-number";
+import { formatBounds, formatNumber, formatShare } from "../../../lib/format-number";
 
 function Row({ label, value, detail }: { label: string; value: ReactNode; detail?: ReactNode }) {
   return (

@@ -1,6 +1,6 @@
 import type { MapView } from "../../../../shared/schemas/maps";
 import { formatDateTime } from "../../../lib/format";
-import { formatNumber } from "../lib/format-number";
+import { formatNumber } from "../../../lib/format-number";
 import { ENSEMBLE_LABELS, settingsParts } from "../lib/map-settings";
 
 const VISIBILITY: Record<MapView["visibility"], string> = { private: "Private", group: "Group", link: "Read-only link" };

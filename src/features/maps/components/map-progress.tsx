@@ -1,6 +1,6 @@
 import type { MapView } from "../../../../shared/schemas/maps";
 import { formatDateTime } from "../../../lib/format";
-import { formatDuration, formatNumber } from "../lib/format-number";
+import { formatDuration, formatNumber } from "../../../lib/format-number";
 import { StatusBadge } from "./status-badge";
 
 type Progress = Pick<MapView, "status" | "cellsTotal" | "cellsDone" | "cellsComputed" | "cellsFromCache" | "throughput" | "etaSeconds" | "failure" | "finishedAt">;

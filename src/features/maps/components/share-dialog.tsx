@@ -6,7 +6,7 @@ import { controlClass, FormMessage, SelectField } from "../../../components/ui/f
 import { isApiError } from "../../../lib/api-client";
 import { toast } from "../../../lib/toast-store";
 import { useRevokeShareLink, useShareLink, useUpdateMap } from "../api/map-mutations";
-import { Modal } from "./modal";
+import { Modal } from "../../../components/ui/modal";
 
 const CHOICES: { value: Visibility; label: string; help: string }[] = [
   { value: "private", label: "Private", help: "Only you." },

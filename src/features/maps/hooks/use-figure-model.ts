@@ -8,7 +8,7 @@ import type { Criterion } from "../lib/filters";
 import { layerValues, stateCounts, type GridModel } from "../lib/grid-model";
 import { settingsLine } from "../lib/map-settings";
 import { overlayCurves } from "../lib/overlay-curves";
-import { axisScale } from "../lib/plot-geometry";
+import { axisScale } from "../../../lib/axis-scale";
 
 /**
  * Everything the map figure draws, derived once per input: the layer's values, colour scale

@@ -1,7 +1,7 @@
 import { layers, type LayerId } from "../../../../shared/maps/layers";
 import type { LayerScale } from "./color-scale";
 import { matchesCriteria, type Criterion } from "./filters";
-import { formatNumber, formatShare } from "./format-number";
+import { formatNumber, formatShare } from "../../../lib/format-number";
 import type { GridModel } from "./grid-model";
 import { SPECIAL_FILLS } from "./palettes";
 

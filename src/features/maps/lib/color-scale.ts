@@ -1,6 +1,7 @@
 import { scaleLinear, scaleLog } from "@visx/scale";
 import { layers, regimeCodes, type LayerId, type LayerInfo } from "../../../../shared/maps/layers";
 import type { Regime } from "../../../../shared/schemas/theory";
+import { pickEvenly } from "../../../lib/axis-scale";
 import { rampColors } from "./oklab";
 import { KILN, REGIME_COLORS, SADDLE, TIDE } from "./palettes";
 
@@ -53,13 +54,6 @@ function extent(vs: number[]): [number, number] {
   return [lo, hi];
 }
 
-/** At most `most` ticks, evenly picked, keeping the first and the last. */
-function thin(ticks: number[], most: number): number[] {
-  if (ticks.length <= most) return ticks;
-  const step = (ticks.length - 1) / (most - 1);
-  return Array.from({ length: most }, (_, k) => ticks[Math.round(k * step)]);
-}
-
 function domainFor(kind: LayerInfo["kind"], vs: number[]): { domain: [number, number]; center: number | null } {
   if (kind === "share") return { domain: [0, 1], center: null };
   if (kind === "ratio") {
@@ -86,7 +80,7 @@ function continuous(layer: LayerInfo, values: ArrayLike<number>): ContinuousScal
     const u = v <= 0 && transform === "log" ? 0 : (t(v) - lo) / span;
     return lut[Math.round(Math.min(1, Math.max(0, u)) * (LUT_SIZE - 1))];
   };
-  const ticks = thin(transform === "log" ? scaleLog({ domain }).ticks(5) : scaleLinear({ domain }).ticks(5), 7);
+  const ticks = pickEvenly(transform === "log" ? scaleLog({ domain }).ticks(5) : scaleLinear({ domain }).ticks(5), 7);
   return { kind: "continuous", layer, domain, transform, center, lut, ticks, colorOf };
 }
 

@@ -1,5 +1,5 @@
 import type { MapView } from "../../../../shared/schemas/maps";
-import { formatNumber } from "./format-number";
+import { formatNumber } from "../../../lib/format-number";
 
 export const ENSEMBLE_LABELS: Readonly<Record<string, string>> = {
   rate: "Rate network",

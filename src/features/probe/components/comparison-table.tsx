@@ -1,12 +1,12 @@
 import type { ReactNode } from "react";
 import type { IntervalJson } from "../../../../shared/schemas/cell-result";
 import type { ProbeComparison, ProbeResult } from "../../../../shared/schemas/probes";
-import { num, share } from "../lib/format";
+import { formatNumber, formatShare } from "../../../lib/format-number";
 
 const th = "px-3 py-2 text-left text-xs font-semibold text-ink-soft";
 
 function Ci({ i, asShare }: { i: IntervalJson; asShare?: boolean }) {
-  const f = asShare ? share : num;
+  const f = asShare ? formatShare : formatNumber;
   return (
     <>
       {f(i.estimate)}
@@ -41,7 +41,7 @@ export function ComparisonTable({ result, comparison }: { result: ProbeResult; c
               <th className={th} />
               <th className={th}>Uploaded matrix</th>
               <th className={th}>
-                {comparison.networks} random networks, g = {num(comparison.params.g)}, τ = {num(comparison.tau)}
+                {comparison.networks} random networks, g = {formatNumber(comparison.params.g)}, τ = {formatNumber(comparison.tau)}
               </th>
             </tr>
           </thead>
@@ -55,7 +55,7 @@ export function ComparisonTable({ result, comparison }: { result: ProbeResult; c
         </table>
       </div>
       <p className="text-xs text-ink-soft">
-        Each side ran {comparison.starts} starts per network (seed {comparison.seed}), μ = {num(comparison.mu)}, N = {comparison.params.N}, φ = {comparison.params.nonlinearity}, I = {num(comparison.params.input)}. Ensemble values are means over networks with 95 % intervals; found counts on both sides are lower bounds.
+        Each side ran {comparison.starts} starts per network (seed {comparison.seed}), μ = {formatNumber(comparison.mu)}, N = {comparison.params.N}, φ = {comparison.params.nonlinearity}, I = {formatNumber(comparison.params.input)}. Ensemble values are means over networks with 95 % intervals; found counts on both sides are lower bounds.
         {" "}Per network, stable found: {comparison.perNetwork.map((p) => p.stableFound).join(", ")}.
       </p>
       {comparison.notes.length > 0 && (

@@ -1,7 +1,8 @@
 import { AxisBottom, AxisLeft } from "@visx/axis";
 import { scaleLinear } from "@visx/scale";
 import type { ProbeView } from "../../../../shared/schemas/probes";
-import { num } from "../lib/format";
+import { equalAspect } from "../../../lib/axis-scale";
+import { formatNumber } from "../../../lib/format-number";
 
 const M = { left: 52, right: 14, top: 12, bottom: 44 };
 const FONT = "Inter, ui-sans-serif, system-ui, sans-serif";
@@ -20,15 +21,6 @@ export function ellipsePath(g: number, tau: number, count = 120): { re: number; 
   });
 }
 
-/** Domains with equal units per pixel on both axes, covering every point with a margin. */
-function equalAspect(xs: number[], ys: number[], w: number, h: number) {
-  const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
-  const per = Math.max((x1 - x0 || 1) / w, (y1 - y0 || 1) / h) * 1.12;
-  const cx = (x0 + x1) / 2;
-  const cy = (y0 + y1) / 2;
-  return { x: [cx - (per * w) / 2, cx + (per * w) / 2], y: [cy - (per * h) / 2, cy + (per * h) / 2] };
-}
-
 /**
  * Eigenvalues of J against the elliptic-law ellipse of the estimated ĝ and τ̂, with the line
  * Re λ = μ: the origin (I = 0, φ'(0) = 1) is unstable along every eigenvalue right of it.
@@ -41,12 +33,12 @@ export function EigenPlot({ probe, width }: { probe: ProbeView; width: number })
   const height = Math.round(Math.min(420, Math.max(260, width * 0.62)));
   const w = Math.max(80, width - M.left - M.right);
   const h = height - M.top - M.bottom;
-  const dom = equalAspect([...re, ...ellipse.map((p) => p.re), probe.mu], [...im, ...ellipse.map((p) => p.im)], w, h);
+  const dom = equalAspect([...re, ...ellipse.map((p) => p.re), probe.mu], [...im, ...ellipse.map((p) => p.im)], w, h, 1.12);
   const x = scaleLinear<number>({ domain: dom.x, range: [0, w] });
   const y = scaleLinear<number>({ domain: dom.y, range: [h, 0] });
   const beyond = re.filter((r) => r > probe.mu).length;
   const path = ellipse.map((p, k) => `${k ? "L" : "M"}${x(p.re).toFixed(1)} ${y(p.im).toFixed(1)}`).join("");
-  const fmt = (v: unknown) => num(Number(v));
+  const fmt = (v: unknown) => formatNumber(Number(v));
   return (
     <figure className="flex flex-col gap-2">
       <svg width={width} height={height} viewBox={`0 0 ${width} ${height}`} role="img" aria-label={`Eigenvalues of J (${re.length}) against the elliptic law`} fontFamily={FONT}>
@@ -63,9 +55,9 @@ export function EigenPlot({ probe, width }: { probe: ProbeView; width: number })
         </g>
       </svg>
       <figcaption className="text-xs leading-relaxed text-ink-soft" style={{ paddingLeft: M.left }}>
-        {re.length} eigenvalues of J. {beyond} lie right of Re λ = μ = {num(probe.mu)}: unstable directions of the origin when I = 0.
+        {re.length} eigenvalues of J. {beyond} lie right of Re λ = μ = {formatNumber(probe.mu)}: unstable directions of the origin when I = 0.
         {g
-          ? ` Shaded: the elliptic law for ĝ = ${num(g)}, τ̂ = ${num(tau)} (semi-axes ${num(g * (1 + Math.max(-1, Math.min(1, tau))))} and ${num(g * (1 - Math.max(-1, Math.min(1, tau))))}), a large-N prediction for random couplings with these statistics; a trained matrix's outliers sit outside it.`
+          ? ` Shaded: the elliptic law for ĝ = ${formatNumber(g)}, τ̂ = ${formatNumber(tau)} (semi-axes ${formatNumber(g * (1 + Math.max(-1, Math.min(1, tau))))} and ${formatNumber(g * (1 - Math.max(-1, Math.min(1, tau))))}), a large-N prediction for random couplings with these statistics; a trained matrix's outliers sit outside it.`
           : " No ellipse: ĝ is undefined for this matrix."}
       </figcaption>
     </figure>

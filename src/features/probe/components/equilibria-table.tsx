@@ -1,7 +1,7 @@
 import { apiPaths } from "../../../../shared/schemas/api-paths";
 import type { ProbeResult } from "../../../../shared/schemas/probes";
 import { Badge } from "../../../components/ui/badge";
-import { num, share } from "../lib/format";
+import { formatNumber, formatShare } from "../../../lib/format-number";
 
 const th = "px-3 py-2 text-left text-xs font-semibold text-ink-soft";
 const td = "px-3 py-1.5 font-mono text-xs tabular-nums text-ink";
@@ -46,12 +46,12 @@ export function EquilibriaTable({ probeId, result }: { probeId: string; result: 
               </td>
               <td className="px-3 py-1.5">{e.stable ? <Badge tone="moss">stable</Badge> : <Badge tone="ember">unstable</Badge>}</td>
               <td className={td}>{e.index}</td>
-              <td className={td}>{num(e.maxRealPart)}</td>
-              <td className={td}>{num(e.normRms)}</td>
-              <td className={td}>{num(e.normInf)}</td>
+              <td className={td}>{formatNumber(e.maxRealPart)}</td>
+              <td className={td}>{formatNumber(e.normRms)}</td>
+              <td className={td}>{formatNumber(e.normInf)}</td>
               <td className={td}>{e.hits}</td>
-              <td className={td}>{share(e.basinShare)}</td>
-              <td className={td}>{num(e.meanSettleTime)}</td>
+              <td className={td}>{formatShare(e.basinShare)}</td>
+              <td className={td}>{formatNumber(e.meanSettleTime)}</td>
             </tr>
           ))}
         </tbody>

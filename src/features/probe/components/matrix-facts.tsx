@@ -1,6 +1,7 @@
 import type { ReactNode } from "react";
 import type { ProbeView } from "../../../../shared/schemas/probes";
-import { interval, num, plusMinus } from "../lib/format";
+import { formatNumber } from "../../../lib/format-number";
+import { interval, plusMinus } from "../lib/format";
 
 function Fact({ label, value, detail }: { label: ReactNode; value: ReactNode; detail?: ReactNode }) {
   return (
@@ -21,15 +22,15 @@ export function MatrixFacts({ probe }: { probe: ProbeView }) {
         <Fact label="Units N" value={s.n} detail={`${s.pairs} pairs i < j`} />
         <Fact label="Gain ĝ = √(N·var J_ij, i≠j)" value={plusMinus(s.g)} detail={s.g ? interval(s.g) : "needs N ≥ 3"} />
         <Fact label="Symmetry τ̂ = corr(J_ij, J_ji)" value={plusMinus(s.tau)} detail={s.tau ? `${interval(s.tau)} (Fisher z)` : "needs N ≥ 4"} />
-        <Fact label="Relaxation rate μ" value={num(probe.mu)} detail={s.g ? `μ/ĝ = ${num(probe.mu / s.g.estimate)}` : undefined} />
-        <Fact label="Off-diagonal mean" value={`${num(s.offDiagonal.mean)} ± ${num(s.offDiagonal.meanSe, 2)}`} detail={`sd ${num(s.offDiagonal.sd)} over ${s.offDiagonal.count} entries`} />
-        <Fact label="Diagonal mean" value={num(s.diagonal.mean)} detail={`range [${num(s.diagonal.min)}, ${num(s.diagonal.max)}]`} />
-        <Fact label="Diagonal sd" value={num(s.diagonal.sd)} detail={s.ensembleDiagonalSd != null ? `ensemble at ĝ, τ̂: ${num(s.ensembleDiagonalSd)}` : undefined} />
-        <Fact label="Mean row sum Σ_j J_ij" value={num(s.rowSumMean)} detail={`‖J‖_F = ${num(s.frobenius)}`} />
+        <Fact label="Relaxation rate μ" value={formatNumber(probe.mu)} detail={s.g ? `μ/ĝ = ${formatNumber(probe.mu / s.g.estimate)}` : undefined} />
+        <Fact label="Off-diagonal mean" value={`${formatNumber(s.offDiagonal.mean)} ± ${formatNumber(s.offDiagonal.meanSe, 2)}`} detail={`sd ${formatNumber(s.offDiagonal.sd)} over ${s.offDiagonal.count} entries`} />
+        <Fact label="Diagonal mean" value={formatNumber(s.diagonal.mean)} detail={`range [${formatNumber(s.diagonal.min)}, ${formatNumber(s.diagonal.max)}]`} />
+        <Fact label="Diagonal sd" value={formatNumber(s.diagonal.sd)} detail={s.ensembleDiagonalSd != null ? `ensemble at ĝ, τ̂: ${formatNumber(s.ensembleDiagonalSd)}` : undefined} />
+        <Fact label="Mean row sum Σ_j J_ij" value={formatNumber(s.rowSumMean)} detail={`‖J‖_F = ${formatNumber(s.frobenius)}`} />
       </dl>
       <p className="text-xs text-ink-soft">
         Estimates are ± one standard error. ĝ treats the pairs (J_ij, J_ji) as the independent units; τ̂'s interval uses Fisher's z transform (normal theory).
-        {" "}φ = {probe.nonlinearity}; input {probe.input ? `vector: mean ${num(probe.input.mean)}, sd ${num(probe.input.sd)}, range [${num(probe.input.min)}, ${num(probe.input.max)}]` : "I = 0"}.
+        {" "}φ = {probe.nonlinearity}; input {probe.input ? `vector: mean ${formatNumber(probe.input.mean)}, sd ${formatNumber(probe.input.sd)}, range [${formatNumber(probe.input.min)}, ${formatNumber(probe.input.max)}]` : "I = 0"}.
       </p>
     </div>
   );

@@ -1,7 +1,7 @@
 import { Link } from "react-router-dom";
 import type { ProbeSummary } from "../../../../shared/schemas/probes";
 import { formatDate } from "../../../lib/format";
-import { num } from "../lib/format";
+import { formatNumber } from "../../../lib/format-number";
 import { ProbeStatusBadge } from "./probe-status";
 
 /** Uploaded matrices: title, N, ĝ, τ̂, μ, owner and group, status. */
@@ -21,7 +21,7 @@ export function ProbeList({ probes }: { probes: ProbeSummary[] }) {
           </div>
           <div className="flex items-center gap-3">
             <span className="font-mono text-xs text-ink-soft tabular-nums">
-              N = {p.n} · ĝ = {num(p.gEstimate)} · τ̂ = {num(p.tauEstimate)} · μ = {num(p.mu)}
+              N = {p.n} · ĝ = {formatNumber(p.gEstimate)} · τ̂ = {formatNumber(p.tauEstimate)} · μ = {formatNumber(p.mu)}
             </span>
             <ProbeStatusBadge status={p.status} />
           </div>

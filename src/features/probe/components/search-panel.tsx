@@ -5,7 +5,8 @@ import { Button } from "../../../components/ui/button";
 import { FormMessage, TextField } from "../../../components/ui/field";
 import { applyServerError } from "../../../lib/form-errors";
 import { useStartSearch } from "../api/probe-mutations";
-import { duration, num } from "../lib/format";
+import { formatNumber } from "../../../lib/format-number";
+import { duration } from "../lib/format";
 
 /** Work units per minute on two threads, measured by scripts/bench-probe.ts (shared/schemas/probes.ts). */
 const WORK_PER_MINUTE = 1.5e7;
@@ -75,7 +76,7 @@ export function SearchForm({ probe, siteRole }: { probe: ProbeView; siteRole: "m
         </div>
       </details>
       <p className={work > most ? "text-xs text-rose-700" : "text-xs text-ink-soft"}>
-        Work N² × starts × (1 + K) = {num(work)} of at most {num(most)} for {siteRole}s; roughly {duration((work / WORK_PER_MINUTE) * 60)} on two threads when runs use the whole time limit (a rough guide).
+        Work N² × starts × (1 + K) = {formatNumber(work)} of at most {formatNumber(most)} for {siteRole}s; roughly {duration((work / WORK_PER_MINUTE) * 60)} on two threads when runs use the whole time limit (a rough guide).
       </p>
       <Button type="submit" busy={start.isPending} disabled={probe.status === "searching" || probe.access === "viewer"} className="self-start">
         {probe.search ? "Search again" : "Find equilibria"}

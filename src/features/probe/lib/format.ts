@@ -1,28 +1,15 @@
 import type { Estimate } from "../../../../shared/schemas/probes";
-
-/** Up to `digits` significant digits, exponent form for tiny or huge magnitudes, a true minus sign, "—" for none. */
-export function num(v: number | null | undefined, digits = 3): string {
-  if (v == null || Number.isNaN(v)) return "—";
-  if (!Number.isFinite(v)) return v > 0 ? "∞" : "−∞";
-  const a = Math.abs(v);
-  const s = a !== 0 && (a >= 1e5 || a < 1e-3) ? v.toExponential(digits - 1).replace(/\.?0+e/, "e").replace("e+", "e") : String(Number(v.toPrecision(digits)));
-  return s.replace("-", "−");
-}
-
-/** "93.4 %". */
-export function share(v: number | null | undefined): string {
-  return v == null || Number.isNaN(v) ? "—" : `${num(v * 100)} %`;
-}
+import { formatNumber, formatShare } from "../../../lib/format-number";
 
 /** "1.51 ± 0.04" (estimate ± one standard error). */
 export function plusMinus(e: Estimate | null): string {
-  return e ? `${num(e.estimate)} ± ${num(e.se, 2)}` : "—";
+  return e ? `${formatNumber(e.estimate)} ± ${formatNumber(e.se, 2)}` : "—";
 }
 
 /** "95 % CI [1.43, 1.59]". */
 export function interval(e: { lower: number; upper: number } | null, asShare = false): string {
   if (!e) return "";
-  const f = asShare ? share : num;
+  const f = asShare ? formatShare : formatNumber;
   return `95 % CI [${f(e.lower)}, ${f(e.upper)}]`;
 }
 

@@ -1,11 +1,5 @@
 import { axisPoints } from "../../../../shared/schemas/maps";
-
-interface Axis {
-  min: number;
-  max: number;
-  steps: number;
-  scale: "linear" | "log";
-}
+import type { AxisSpec as Axis } from "../../../lib/axis-scale";
 
 /** Where a probe sits on a rate-network map. */
 export interface Placement {

@@ -2,12 +2,12 @@ import { useId, type CSSProperties } from "react";
 import type { BoundaryRow } from "../../../../shared/schemas/review";
 import { mStable, originStabilityMu } from "../../../../shared/theory/index";
 import { ESTIMATE_COLOR, FIGURE_INK, FIGURE_PAPER, FIGURE_PENDING, FIGURE_SOFT, PREDICTED_COLOR, PREDICTED_STABLE_COLOR, shareColor } from "../lib/colors";
-import { fmt } from "../lib/format";
-import { gridScale, gridTicks, type AxisLike, type PixelScale } from "../lib/plot-scale";
+import { formatNumber } from "../../../lib/format-number";
+import { axisScale, band, isLogAxis, pickEvenly, type AxisSpec, type ContinuousPixelScale } from "../../../lib/axis-scale";
 
 export interface BoundaryFigureProps {
-  mu: AxisLike;
-  tau: AxisLike;
+  mu: AxisSpec;
+  tau: AxisSpec;
   mus: number[];
   taus: number[];
   /** Share of networks with exactly one stable state, values[j][i] (null: not done). */
@@ -47,8 +47,8 @@ export function predictedCurves(ensemble: string, muCritical: number | null, gai
   return [];
 }
 
-function path(points: { mu: number; tau: number }[], x: PixelScale, y: PixelScale): string {
-  return points.filter((p) => p.mu > 0 || !x.log).map((p, k) => `${k ? "L" : "M"}${x(p.mu).toFixed(1)} ${y(p.tau).toFixed(1)}`).join("");
+function path(points: { mu: number; tau: number }[], x: ContinuousPixelScale, y: ContinuousPixelScale, logMu: boolean): string {
+  return points.filter((p) => p.mu > 0 || !logMu).map((p, k) => `${k ? "L" : "M"}${x(p.mu).toFixed(1)} ${y(p.tau).toFixed(1)}`).join("");
 }
 
 /**
@@ -60,9 +60,12 @@ export function BoundaryFigure(p: BoundaryFigureProps) {
   const clip = `clip${useId().replace(/[^a-zA-Z0-9]/g, "")}`;
   const plotW = Math.max(140, p.width - M.left - M.right);
   const plotH = Math.max(120, Math.min(plotW * 0.6, 40 * p.tau.steps + 80));
-  const x = gridScale(p.mu, [0, plotW]);
-  const y = gridScale(p.tau, [plotH, 0]);
-  const curves = predictedCurves(p.ensemble, p.muCritical, p.gain, y.domain);
+  const xRange: [number, number] = [0, plotW];
+  const yRange: [number, number] = [plotH, 0];
+  const x = axisScale(p.mu, xRange);
+  const y = axisScale(p.tau, yRange);
+  const logMu = isLogAxis(p.mu);
+  const curves = predictedCurves(p.ensemble, p.muCritical, p.gain, y.domain() as [number, number]);
   const crossed = p.rows.filter((r) => r.status === "crossed" && r.muHalf !== null);
   const height = M.top + plotH + M.bottom;
 
@@ -72,13 +75,13 @@ export function BoundaryFigure(p: BoundaryFigureProps) {
       <g transform={`translate(${M.left},${M.top})`}>
         <clipPath id={clip}><rect width={plotW} height={plotH} /></clipPath>
         {p.share.map((row, j) => row.map((s, i) => {
-          const [x0, x1] = x.band(i);
-          const [y1, y0] = y.band(j);
-          return <rect key={`${i},${j}`} x={x0} y={y0} width={x1 - x0 + 0.4} height={y1 - y0 + 0.4} fill={s === null ? FIGURE_PENDING : shareColor(s)} />;
+          const bx = band(i, p.mu.steps, xRange);
+          const by = band(j, p.tau.steps, yRange);
+          return <rect key={`${i},${j}`} x={bx.start} y={by.start} width={bx.size + 0.4} height={by.size + 0.4} fill={s === null ? FIGURE_PENDING : shareColor(s)} />;
         }))}
         <g clipPath={`url(#${clip})`} fill="none">
-          {curves.map((c) => <path key={c.id} d={path(c.points, x, y)} stroke={c.color} strokeWidth={1.8} strokeDasharray={c.dash} />)}
-          {crossed.length > 1 && <path d={path(crossed.map((r) => ({ mu: r.muHalf!, tau: r.tau })), x, y)} stroke={ESTIMATE_COLOR} strokeWidth={1.4} strokeDasharray="2 2" />}
+          {curves.map((c) => <path key={c.id} d={path(c.points, x, y, logMu)} stroke={c.color} strokeWidth={1.8} strokeDasharray={c.dash} />)}
+          {crossed.length > 1 && <path d={path(crossed.map((r) => ({ mu: r.muHalf!, tau: r.tau })), x, y, logMu)} stroke={ESTIMATE_COLOR} strokeWidth={1.4} strokeDasharray="2 2" />}
           {crossed.map((r) => (
             <g key={r.j} stroke={ESTIMATE_COLOR} strokeWidth={1.6}>
               {r.low !== null && r.high !== null && <path d={`M${x(r.low)} ${y(r.tau)}H${x(r.high)}M${x(r.low)} ${y(r.tau) - 4}v8M${x(r.high)} ${y(r.tau) - 4}v8`} />}
@@ -90,9 +93,9 @@ export function BoundaryFigure(p: BoundaryFigureProps) {
           ))}
         </g>
         <rect width={plotW} height={plotH} fill="none" stroke={FIGURE_SOFT} strokeWidth={0.8} />
-        {gridTicks(p.mus).map((v) => <text key={`x${v}`} x={x(v)} y={plotH + 15} fontSize={11} textAnchor="middle" fill={FIGURE_INK}>{fmt(v)}</text>)}
+        {pickEvenly(p.mus, 6).map((v) => <text key={`x${v}`} x={x(v)} y={plotH + 15} fontSize={11} textAnchor="middle" fill={FIGURE_INK}>{formatNumber(v)}</text>)}
         <text x={plotW / 2} y={plotH + 31} fontSize={11} textAnchor="middle" fill={FIGURE_SOFT}>relaxation rate μ</text>
-        {gridTicks(p.taus).map((v) => <text key={`y${v}`} x={-6} y={y(v) + 4} fontSize={11} textAnchor="end" fill={FIGURE_INK}>{fmt(v)}</text>)}
+        {pickEvenly(p.taus, 6).map((v) => <text key={`y${v}`} x={-6} y={y(v) + 4} fontSize={11} textAnchor="end" fill={FIGURE_INK}>{formatNumber(v)}</text>)}
         <text transform={`translate(${-38},${plotH / 2}) rotate(-90)`} fontSize={11} textAnchor="middle" fill={FIGURE_SOFT}>asymmetry τ</text>
       </g>
     </svg>

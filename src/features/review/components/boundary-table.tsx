@@ -1,5 +1,6 @@
 import type { BoundaryRow, MapBoundary } from "../../../../shared/schemas/review";
-import { fmt, fmtSigned } from "../lib/format";
+import { formatNumber } from "../../../lib/format-number";
+import { fmtSigned } from "../lib/format";
 
 const STATUS_WORDS: Record<BoundaryRow["status"], string> = {
   crossed: "",
@@ -11,12 +12,12 @@ const STATUS_WORDS: Record<BoundaryRow["status"], string> = {
 
 function band(r: BoundaryRow): string {
   if (r.low === null || r.high === null) return r.status === "crossed" ? "not determined" : "—";
-  return `${fmt(r.low)} – ${fmt(r.high)}`;
+  return `${formatNumber(r.low)} – ${formatNumber(r.high)}`;
 }
 
 function lost(r: BoundaryRow): string {
   if (r.muLost === null) return "—";
-  return `${fmt(r.muLost)} (none at ${fmt(r.muLostBelow)})`;
+  return `${formatNumber(r.muLost)} (none at ${formatNumber(r.muLostBelow)})`;
 }
 
 /**
@@ -44,14 +45,14 @@ export function BoundaryTable({ boundary }: { boundary: MapBoundary }) {
         <tbody className="font-mono text-[0.82rem]">
           {boundary.rows.map((r) => (
             <tr key={r.j} className="border-b border-line align-top">
-              <th scope="row" className="py-1.5 pr-3 text-left font-medium">{fmt(r.tau)}</th>
+              <th scope="row" className="py-1.5 pr-3 text-left font-medium">{formatNumber(r.tau)}</th>
               <td className="py-1.5 pr-3">
-                {r.muHalf === null ? <span className="font-sans text-xs text-ink-soft">{STATUS_WORDS[r.status]}</span> : fmt(r.muHalf)}
+                {r.muHalf === null ? <span className="font-sans text-xs text-ink-soft">{STATUS_WORDS[r.status]}</span> : formatNumber(r.muHalf)}
               </td>
               <td className="py-1.5 pr-3">{band(r)}</td>
-              <td className="py-1.5 pr-3">{fmt(r.predictedMu)}</td>
+              <td className="py-1.5 pr-3">{formatNumber(r.predictedMu)}</td>
               <td className="py-1.5 pr-3">{fmtSigned(r.difference)}</td>
-              {field && <td className="py-1.5 pr-3">{fmt(r.predictedMuStable)}</td>}
+              {field && <td className="py-1.5 pr-3">{formatNumber(r.predictedMuStable)}</td>}
               <td className="py-1.5">{lost(r)}</td>
             </tr>
           ))}

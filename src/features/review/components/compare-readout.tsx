@@ -1,5 +1,6 @@
 import type { CompareCell } from "../../../../shared/schemas/review";
-import { fmt, fmtP, fmtShare, fmtSigned } from "../lib/format";
+import { formatNumber } from "../../../lib/format-number";
+import { fmtP, fmtShare, fmtSigned } from "../lib/format";
 
 /** The hovered cell of a comparison: both values, their difference and the tests. */
 export function CompareReadout({ cell, names }: { cell: CompareCell | null; names: [string, string] }) {
@@ -14,7 +15,7 @@ export function CompareReadout({ cell, names }: { cell: CompareCell | null; name
   );
   return (
     <div className="flex flex-col gap-2 text-sm">
-      <p className="font-mono text-xs text-ink-soft">μ = {fmt(cell.mu)}, τ = {fmt(cell.tau)}</p>
+      <p className="font-mono text-xs text-ink-soft">μ = {formatNumber(cell.mu)}, τ = {formatNumber(cell.tau)}</p>
       <table className="w-full border-collapse">
         <thead>
           <tr className="text-left text-xs text-ink-soft">
@@ -25,14 +26,14 @@ export function CompareReadout({ cell, names }: { cell: CompareCell | null; name
           </tr>
         </thead>
         <tbody>
-          {row("Stable found", fmt(cell.a.stableFound), fmt(cell.b.stableFound), fmtSigned(cell.difference.stableFound))}
+          {row("Stable found", formatNumber(cell.a.stableFound), formatNumber(cell.b.stableFound), fmtSigned(cell.difference.stableFound))}
           {row("One stable", fmtShare(cell.a.oneStable), fmtShare(cell.b.oneStable), fmtSigned(cell.difference.oneStable))}
           {row("Networks", String(cell.a.networks), String(cell.b.networks), "")}
         </tbody>
       </table>
       {cell.welch ? (
         <p>
-          Welch: t = {fmt(cell.welch.t)}, df = {fmt(cell.welch.df)}, {fmtP(cell.welch.pValue)}
+          Welch: t = {formatNumber(cell.welch.t)}, df = {formatNumber(cell.welch.df)}, {fmtP(cell.welch.pValue)}
           {cell.permutationP !== null && <>; exact permutation {fmtP(cell.permutationP)}</>}.{" "}
           <strong className={cell.agree ? "text-moss-700" : "text-ember-700"}>{cell.agree ? "Agree" : "Differ"} at 5 %</strong>
         </p>

@@ -1,8 +1,9 @@
 import { useId } from "react";
 import type { CompareCell, MapComparison } from "../../../../shared/schemas/review";
 import { divergingColor, FIGURE_INK, FIGURE_PAPER, FIGURE_PENDING, FIGURE_SOFT } from "../lib/colors";
-import { fmt, fmtSigned } from "../lib/format";
-import { gridScale, gridTicks, type AxisLike } from "../lib/plot-scale";
+import { formatNumber } from "../../../lib/format-number";
+import { fmtSigned } from "../lib/format";
+import { axisScale, band, pickEvenly, type AxisSpec } from "../../../lib/axis-scale";
 
 export type DifferenceLayer = "stableFound" | "oneStable";
 
@@ -13,8 +14,8 @@ export const DIFFERENCE_LABELS: Record<DifferenceLayer, string> = {
 
 interface DifferenceHeatmapProps {
   comparison: MapComparison;
-  mu: AxisLike;
-  tau: AxisLike;
+  mu: AxisSpec;
+  tau: AxisSpec;
   layer: DifferenceLayer;
   width: number;
   onHover?: (cell: CompareCell | null) => void;
@@ -65,8 +66,10 @@ export function DifferenceHeatmap({ comparison, mu, tau, layer, width, onHover, 
   const plotW = Math.max(120, width - M.left - M.right);
   const plotH = Math.max(100, Math.min(plotW * 0.62, 44 * tau.steps + 40));
   const height = M.top + plotH + M.bottom + (width < NARROW ? 22 : 0);
-  const x = gridScale(mu, [0, plotW]);
-  const y = gridScale(tau, [plotH, 0]);
+  const xRange: [number, number] = [0, plotW];
+  const yRange: [number, number] = [plotH, 0];
+  const x = axisScale(mu, xRange);
+  const y = axisScale(tau, yRange);
   const extent = extentOf(comparison.cells, layer);
   const hatch = `hatch${useId().replace(/[^a-zA-Z0-9]/g, "")}`;
   const ringR = Math.max(2.5, Math.min(7, Math.min(plotW / mu.steps, plotH / tau.steps) * 0.18));
@@ -83,23 +86,23 @@ export function DifferenceHeatmap({ comparison, mu, tau, layer, width, onHover, 
       {!compact && <text x={M.left} y={20} fontSize={13} fontWeight={600} fill={FIGURE_INK}>{DIFFERENCE_LABELS[layer]}: first − second</text>}
       <g transform={`translate(${M.left},${M.top})`} onPointerLeave={() => onHover?.(null)}>
         {comparison.cells.map((c) => {
-          const [x0, x1] = x.band(c.i);
-          const [y1, y0] = y.band(c.j);
+          const bx = band(c.i, mu.steps, xRange);
+          const by = band(c.j, tau.steps, yRange);
           const d = c.difference[layer];
           return (
             <g key={`${c.i},${c.j}`} onPointerEnter={() => onHover?.(c)} onClick={() => onHover?.(c)}>
-              <rect x={x0} y={y0} width={x1 - x0 + 0.4} height={y1 - y0 + 0.4} fill={d === null ? `url(#${hatch})` : divergingColor(d, extent)} />
-              {c.agree === false && <circle cx={(x0 + x1) / 2} cy={(y0 + y1) / 2} r={ringR} fill="none" stroke={FIGURE_INK} strokeWidth={1.4} />}
+              <rect x={bx.start} y={by.start} width={bx.size + 0.4} height={by.size + 0.4} fill={d === null ? `url(#${hatch})` : divergingColor(d, extent)} />
+              {c.agree === false && <circle cx={bx.start + bx.size / 2} cy={by.start + by.size / 2} r={ringR} fill="none" stroke={FIGURE_INK} strokeWidth={1.4} />}
             </g>
           );
         })}
         <rect width={plotW} height={plotH} fill="none" stroke={FIGURE_SOFT} strokeWidth={0.8} />
-        {gridTicks(comparison.mu).map((v) => (
-          <text key={`x${v}`} x={x(v)} y={plotH + 15} fontSize={11} textAnchor="middle" fill={FIGURE_INK}>{fmt(v)}</text>
+        {pickEvenly(comparison.mu, 6).map((v) => (
+          <text key={`x${v}`} x={x(v)} y={plotH + 15} fontSize={11} textAnchor="middle" fill={FIGURE_INK}>{formatNumber(v)}</text>
         ))}
         <text x={plotW / 2} y={plotH + 31} fontSize={11} textAnchor="middle" fill={FIGURE_SOFT}>relaxation rate μ</text>
-        {gridTicks(comparison.tau).map((v) => (
-          <text key={`y${v}`} x={-6} y={y(v) + 4} fontSize={11} textAnchor="end" fill={FIGURE_INK}>{fmt(v)}</text>
+        {pickEvenly(comparison.tau, 6).map((v) => (
+          <text key={`y${v}`} x={-6} y={y(v) + 4} fontSize={11} textAnchor="end" fill={FIGURE_INK}>{formatNumber(v)}</text>
         ))}
         <text transform={`translate(${-38},${plotH / 2}) rotate(-90)`} fontSize={11} textAnchor="middle" fill={FIGURE_SOFT}>asymmetry τ</text>
       </g>

@@ -2,7 +2,7 @@ import { useId, useState, type ChangeEvent, type FormEvent } from "react";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/field";
 import { isApiError } from "../../../lib/api-client";
-import { fmt } from "../lib/format";
+import { formatNumber } from "../../../lib/format-number";
 
 type Manifest = Record<string, unknown>;
 
@@ -22,7 +22,7 @@ export function manifestOf(text: string): Manifest | null {
 function describe(m: Manifest): string[] {
   const axis = (a: unknown) => {
     const x = a as { min?: number; max?: number; steps?: number; scale?: string } | undefined;
-    return x ? `${fmt(x.min)} – ${fmt(x.max)} in ${x.steps} steps${x.scale === "log" ? " (log)" : ""}` : "—";
+    return x ? `${formatNumber(x.min)} – ${formatNumber(x.max)} in ${x.steps} steps${x.scale === "log" ? " (log)" : ""}` : "—";
   };
   const b = (m.budget ?? {}) as { networks?: number; starts?: number };
   return [

@@ -1,14 +1,9 @@
+import { formatNumber } from "../../../lib/format-number";
+
 /**
- * Numbers of the review pages: 3 significant digits with a true minus sign, p-values in the
- * usual reporting form, shares as percentages; "—" for a missing value.
+ * Numbers of the review pages on top of formatNumber: p-values in the usual reporting form,
+ * shares as percentages, signed differences, durations; "—" for a missing value.
  */
-export function fmt(v: number | null | undefined, digits = 3): string {
-  if (v == null || Number.isNaN(v)) return "—";
-  if (!Number.isFinite(v)) return v > 0 ? "∞" : "−∞";
-  const a = Math.abs(v);
-  const s = a !== 0 && (a >= 1e5 || a < 1e-3) ? v.toExponential(digits - 1).replace("e+", "e") : String(Number(v.toPrecision(digits)));
-  return s.replace("-", "−");
-}
 
 /** "p < 0.001", "p = 0.034", "p = 1". */
 export function fmtP(p: number | null | undefined): string {
@@ -26,13 +21,13 @@ export function fmtShare(v: number | null | undefined, digits = 2): string {
 /** A signed difference: "+0.25", "−1.1", "0". */
 export function fmtSigned(v: number | null | undefined): string {
   if (v == null || Number.isNaN(v)) return "—";
-  return v > 0 ? `+${fmt(v)}` : fmt(v);
+  return v > 0 ? `+${formatNumber(v)}` : formatNumber(v);
 }
 
 /** Seconds as "42 s", "3.5 min", "2.1 h". */
 export function fmtSeconds(s: number | null | undefined): string {
   if (s == null || !Number.isFinite(s)) return "—";
-  if (s < 90) return `${fmt(s, 2)} s`;
-  if (s < 5400) return `${fmt(s / 60, 2)} min`;
-  return `${fmt(s / 3600, 2)} h`;
+  if (s < 90) return `${formatNumber(s, 2)} s`;
+  if (s < 5400) return `${formatNumber(s / 60, 2)} min`;
+  return `${formatNumber(s / 3600, 2)} h`;
 }

@@ -1,6 +1,7 @@
 import type { MapView } from "../../../../shared/schemas/maps";
 import type { MapBoundary, MapReport } from "../../../../shared/schemas/review";
-import { fmt, fmtSeconds } from "./format";
+import { formatNumber } from "../../../lib/format-number";
+import { fmtSeconds } from "./format";
 
 export interface FactGroup {
   title: string;
@@ -8,7 +9,7 @@ export interface FactGroup {
 }
 
 function axisText(a: MapView["mu"]): string {
-  return `${fmt(a.min, 6)} to ${fmt(a.max, 6)}, ${a.steps} step${a.steps === 1 ? "" : "s"}, ${a.scale}`;
+  return `${formatNumber(a.min, 6)} to ${formatNumber(a.max, 6)}, ${a.steps} step${a.steps === 1 ? "" : "s"}, ${a.scale}`;
 }
 
 function when(iso: string | null): string {
@@ -23,7 +24,7 @@ function when(iso: string | null): string {
 export function reportFacts(map: MapView, report: MapReport, boundary: MapBoundary | null): FactGroup[] {
   const b = map.budget;
   const runs = b.networks * b.starts;
-  const settings = Object.entries(map.settings).map(([k, v]): [string, string] => [`Parameter ${k}`, typeof v === "number" ? fmt(v, 6) : String(v)]);
+  const settings = Object.entries(map.settings).map(([k, v]): [string, string] => [`Parameter ${k}`, typeof v === "number" ? formatNumber(v, 6) : String(v)]);
   return [
     {
       title: "Software",
@@ -34,7 +35,7 @@ export function reportFacts(map: MapView, report: MapReport, boundary: MapBounda
         ["Ensemble and version", `${map.ensemble} ${map.ensembleVersion}`],
       ],
     },
-    { title: "Model", rows: [["Ensemble", map.ensemble], ...settings, ["Critical rate μ_c", fmt(map.muCritical, 6)]] },
+    { title: "Model", rows: [["Ensemble", map.ensemble], ...settings, ["Critical rate μ_c", formatNumber(map.muCritical, 6)]] },
     { title: "Grid", rows: [["μ axis", axisText(map.mu)], ["τ axis", axisText(map.tau)], ["Cells", String(map.cellsTotal)]] },
     {
       title: "Budget and seeds",
@@ -42,7 +43,7 @@ export function reportFacts(map: MapView, report: MapReport, boundary: MapBounda
         ["Networks per cell", String(b.networks)],
         ["Starts per network", String(b.starts)],
         ["Runs per cell", String(runs)],
-        ["Time limit tMax", fmt(b.tMax, 6)],
+        ["Time limit tMax", formatNumber(b.tMax, 6)],
         ["Integrator rtol / atol", `${b.rtol.toExponential()} / ${b.atol.toExponential()}`],
         ["Exhaustive search", b.exhaustive ? "yes" : "no"],
         ["Base seed", String(map.seed)],

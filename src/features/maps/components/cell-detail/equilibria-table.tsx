@@ -1,7 +1,7 @@
 import { useMemo, useState } from "react";
 import type { EquilibriumSummary, NetworkSummary } from "../../../../../shared/schemas/cell-result";
 import { cn } from "../../../../lib/cn";
-import { formatNumber, formatShare } from "../../lib/format-number";
+import { formatNumber, formatShare } from "../../../../lib/format-number";
 
 type Row = EquilibriumSummary & { kind: "stable" | "unstable"; rank: number };
 type Key = "rank" | "normRms" | "normInf" | "index" | "maxRealPart" | "basinShare" | "hits" | "meanSettleTime" | "residual";

@@ -1,8 +1,8 @@
 import { AxisBottom, AxisLeft } from "@visx/axis";
 import type { ReactNode } from "react";
-import { formatNumber } from "../../lib/format-number";
+import { formatNumber } from "../../../../lib/format-number";
 import { SPECIAL_FILLS } from "../../lib/palettes";
-import type { ContinuousPixelScale } from "../../lib/plot-geometry";
+import type { ContinuousPixelScale } from "../../../../lib/axis-scale";
 import { FONT } from "../heatmap/figure-axes";
 
 export const PLOT_MARGIN = { left: 52, right: 12, top: 10, bottom: 42 };

@@ -1,5 +1,5 @@
 import type { RunClassName } from "../../../../../shared/schemas/cell-result";
-import { formatShare } from "../../lib/format-number";
+import { formatShare } from "../../../../lib/format-number";
 
 const CLASSES: { id: RunClassName; label: string; help: string; color: string }[] = [
   { id: "settled", label: "Settled", help: "came to rest on a fixed point verified by Newton's method", color: "#3a7648" },

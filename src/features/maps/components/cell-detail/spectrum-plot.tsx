@@ -1,7 +1,8 @@
 import { scaleLinear } from "@visx/scale";
 import type { CellResult } from "../../../../../shared/schemas/cell-result";
 import { ellipsePoints } from "../../../../../shared/theory/elliptic-ellipse";
-import { formatNumber } from "../../lib/format-number";
+import { formatNumber } from "../../../../lib/format-number";
+import { equalAspect } from "../../../../lib/axis-scale";
 import { polylinePath } from "../../lib/plot-geometry";
 import { PLOT_MARGIN, PlotFrame, plotArea } from "./plot-frame";
 
@@ -18,16 +19,6 @@ export function ellipseGain(ensemble: string, settings: Record<string, unknown>)
   return null;
 }
 
-/** Ranges with the same units per pixel on both axes, covering every point with a margin. */
-function equalAspect(xs: number[], ys: number[], w: number, h: number): { x: [number, number]; y: [number, number] } {
-  const [x0, x1] = [Math.min(...xs), Math.max(...xs)];
-  const [y0, y1] = [Math.min(...ys), Math.max(...ys)];
-  const perPx = Math.max((x1 - x0 || 1) / w, (y1 - y0 || 1) / h) * 1.1;
-  const cx = (x0 + x1) / 2;
-  const cy = (y0 + y1) / 2;
-  return { x: [cx - (perPx * w) / 2, cx + (perPx * w) / 2], y: [cy - (perPx * h) / 2, cy + (perPx * h) / 2] };
-}
-
 /** Eigenvalues of the Jacobian at one equilibrium, against the elliptic-law ellipse shifted by −μ. */
 export function SpectrumPlot({ spectrum, mu, tau, gain, width }: { spectrum: Spectrum; mu: number; tau: number; gain: number | null; width: number }) {
   const height = Math.min(360, Math.max(240, width * 0.7));
@@ -35,7 +26,7 @@ export function SpectrumPlot({ spectrum, mu, tau, gain, width }: { spectrum: Spe
   const ellipse = gain ? ellipsePoints(gain, tau, 96) : null;
   const ex = ellipse ? ellipse.re.map((r) => r - mu) : [];
   const ey = ellipse ? ellipse.im : [];
-  const dom = equalAspect([...spectrum.re, ...ex, 0], [...spectrum.im, ...ey, 0], w, h);
+  const dom = equalAspect([...spectrum.re, ...ex, 0], [...spectrum.im, ...ey, 0], w, h, 1.1);
   const x = scaleLinear<number>({ domain: dom.x, range: [0, w] });
   const y = scaleLinear<number>({ domain: dom.y, range: [h, 0] });
   const title = `Eigenvalues of the Jacobian at the ${spectrum.choice === "first-stable" ? "first stable" : "most visited"} equilibrium of network ${spectrum.network}`;

@@ -2,7 +2,7 @@ import { useCallback, useRef, useState, type PointerEvent } from "react";
 import { slotOf, useGridFocus } from "../../hooks/use-grid-focus";
 import type { CellPaint } from "../../lib/cell-paints";
 import { SPECIAL_FILLS } from "../../lib/palettes";
-import { band } from "../../lib/plot-geometry";
+import { band } from "../../../../lib/axis-scale";
 import { HeatCells } from "./heat-cells";
 
 interface CellLayerProps {

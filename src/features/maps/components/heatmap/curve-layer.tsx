@@ -1,5 +1,6 @@
 import type { CurveId, OverlayCurve } from "../../lib/overlay-curves";
-import { polylinePath, type ContinuousPixelScale } from "../../lib/plot-geometry";
+import type { ContinuousPixelScale } from "../../../../lib/axis-scale";
+import { polylinePath } from "../../lib/plot-geometry";
 import { FONT } from "./figure-axes";
 
 interface CurveLayerProps {

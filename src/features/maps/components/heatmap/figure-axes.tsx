@@ -1,8 +1,8 @@
 import { AxisBottom, AxisLeft, AxisTop } from "@visx/axis";
 import { scaleLinear, scaleLog } from "@visx/scale";
-import { formatNumber } from "../../lib/format-number";
+import { formatNumber } from "../../../../lib/format-number";
 import { SPECIAL_FILLS } from "../../lib/palettes";
-import type { ContinuousPixelScale } from "../../lib/plot-geometry";
+import type { ContinuousPixelScale } from "../../../../lib/axis-scale";
 
 export const FONT = "Inter, ui-sans-serif, system-ui, sans-serif";
 

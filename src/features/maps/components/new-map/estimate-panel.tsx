@@ -5,7 +5,7 @@ import { Spinner } from "../../../../components/ui/spinner";
 import { isApiError } from "../../../../lib/api-client";
 import { mapQueries } from "../../api/map-queries";
 import { useDebouncedValue } from "../../hooks/use-debounced-value";
-import { formatDuration } from "../../lib/format-number";
+import { formatDuration } from "../../../../lib/format-number";
 import type { MapForm } from "./map-fields";
 
 function Figure({ label, value, note }: { label: string; value: string; note?: string }) {

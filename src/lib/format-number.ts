@@ -1,4 +1,4 @@
-import type { IntervalJson } from "../../../../shared/schemas/cell-result";
+import type { IntervalJson } from "../../shared/schemas/cell-result";
 
 /**
  * A number for read-outs and legends: up to 3 significant digits, exponent form for very large
