@@ -12,7 +12,7 @@ export function formatNumber(v: number | null | undefined, digits = 3): string {
   if (a === 0) s = "0";
   else if (a >= 1e5 || a < 1e-3) s = v.toExponential(Math.max(0, digits - 1)).replace(/\.?0+e/, "e").replace("e+", "e");
   else s = String(Number(v.toPrecision(digits)));
-  return s.replace("-", "−");
+  return s.replaceAll("-", "−");
 }
 
 /** A share as a percentage: 0.934 → "93.4 %". */

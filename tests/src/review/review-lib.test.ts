@@ -42,6 +42,8 @@ describe("grid geometry and colours", () => {
   });
   it("formats numbers and p-values", () => {
     expect(formatNumber(-0.38412)).toBe("−0.384");
+    // Both minus signs become true minus signs (U+2212), the exponent's too (common practice in typesetting).
+    expect(formatNumber(-1.234e-4)).toBe("−1.23e−4");
     expect(formatNumber(null)).toBe("—");
     expect(fmtP(0.0004)).toBe("p < 0.001");
     expect(fmtP(0.0346)).toBe("p = 0.035");
