@@ -63,3 +63,58 @@ export const outboxListSchema = z.object({
   total: z.number().int().nonnegative(),
 });
 export type OutboxList = z.infer<typeof outboxListSchema>;
+
+/** Hours of finished jobs (completed, failed, cancelled) counted per queue, and of worker activity listed. */
+export const QUEUE_HISTORY_HOURS = 24;
+
+/** One pg-boss queue: jobs waiting or running now, and jobs finished in the last QUEUE_HISTORY_HOURS. */
+export const queueCountsSchema = z.object({
+  name: z.string(),
+  created: z.number().int().nonnegative(),
+  retry: z.number().int().nonnegative(),
+  active: z.number().int().nonnegative(),
+  completed: z.number().int().nonnegative(),
+  failed: z.number().int().nonnegative(),
+  cancelled: z.number().int().nonnegative(),
+});
+export type QueueCounts = z.infer<typeof queueCountsSchema>;
+
+/** A job a worker holds now. Map fields are null for jobs that name no map (or a deleted one). */
+export const activeJobSchema = z.object({
+  queue: z.string(),
+  mapId: idSchema.nullable(),
+  mapTitle: z.string().nullable(),
+  i: z.number().int().nonnegative().nullable(),
+  j: z.number().int().nonnegative().nullable(),
+  startedOn: timestampSchema,
+  retryCount: z.number().int().nonnegative(),
+});
+export type ActiveJob = z.infer<typeof activeJobSchema>;
+
+/** A worker process seen storing cells in the last QUEUE_HISTORY_HOURS (name from WORKER_NAME or host:pid). */
+export const workerActivitySchema = z.object({
+  name: z.string(),
+  cellsLastHour: z.number().int().nonnegative(),
+  lastCellAt: timestampSchema,
+});
+export type WorkerActivity = z.infer<typeof workerActivitySchema>;
+
+/** A map still queued or running. */
+export const inFlightMapSchema = z.object({
+  id: idSchema,
+  title: z.string(),
+  ownerName: z.string(),
+  status: z.enum(["queued", "running"]),
+  cellsDone: z.number().int().nonnegative(),
+  cellsTotal: z.number().int().nonnegative(),
+});
+export type InFlightMap = z.infer<typeof inFlightMapSchema>;
+
+/** GET /api/admin/queue: the compute queue, the workers, and the maps being filled. */
+export const adminQueueSchema = z.object({
+  queues: z.array(queueCountsSchema),
+  activeJobs: z.array(activeJobSchema),
+  workers: z.array(workerActivitySchema),
+  inFlightMaps: z.array(inFlightMapSchema),
+});
+export type AdminQueue = z.infer<typeof adminQueueSchema>;

@@ -29,6 +29,7 @@ export const apiRoutes = {
     user: "/api/admin/users/:userId",
     groups: "/api/admin/groups",
     outbox: "/api/admin/outbox",
+    queue: "/api/admin/queue",
   },
   theory: {
     field: "/api/theory/field",
@@ -90,6 +91,7 @@ export const apiPaths = {
     user: (userId: string) => `/api/admin/users/${seg(userId)}`,
     groups: apiRoutes.admin.groups,
     outbox: apiRoutes.admin.outbox,
+    queue: apiRoutes.admin.queue,
   },
   theory: apiRoutes.theory,
   maps: {

@@ -31,5 +31,9 @@ export function createAdminRouter(admin: AdminService): Router {
     res.json(await admin.listOutbox(req.actor, req.query));
   });
 
+  router.get(paths.queue, async (req, res) => {
+    res.json(await admin.queueOverview(req.actor));
+  });
+
   return router;
 }

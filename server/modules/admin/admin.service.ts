@@ -1,9 +1,11 @@
-import type {
-  AdminGroupList,
-  AdminUser,
-  AdminUserList,
-  ChangeSiteRole,
-  OutboxList,
+import {
+  QUEUE_HISTORY_HOURS,
+  type AdminGroupList,
+  type AdminQueue,
+  type AdminUser,
+  type AdminUserList,
+  type ChangeSiteRole,
+  type OutboxList,
 } from "../../../shared/schemas/admin";
 import type { PageQuery } from "../../../shared/schemas/common";
 import type { Db } from "../../db/client";
@@ -11,6 +13,7 @@ import { requireActor, type Actor } from "../../lib/actor";
 import { iso } from "../../lib/dto";
 import { ConflictError, ForbiddenError, NotFoundError } from "../../lib/errors";
 import { listOutboxMessages } from "../../mail/outbox.repo";
+import * as queueRepo from "./admin-queue.repo";
 import * as repo from "./admin.repo";
 
 /** Throws unless the actor is signed in with site role admin. */
@@ -20,7 +23,7 @@ export function requireAdmin(actor: Actor | null | undefined): Actor {
   return me;
 }
 
-/** Site administration: accounts, groups, the outbox. Site admins only. */
+/** Site administration: accounts, groups, the outbox, the compute queue. Site admins only. */
 export class AdminService {
   private readonly db: Db;
 
@@ -62,6 +65,27 @@ export class AdminService {
     requireAdmin(actor);
     const { items, total } = await listOutboxMessages(this.db, query);
     return { items: items.map((m) => ({ ...m, createdAt: iso(m.createdAt) })), total };
+  }
+
+  /**
+   * The compute queue as pg-boss holds it (jobs per queue and state; finished ones over the last
+   * QUEUE_HISTORY_HOURS), the jobs running now, the workers that stored cells recently, and the
+   * maps still queued or running.
+   */
+  async queueOverview(actor: Actor | null | undefined): Promise<AdminQueue> {
+    requireAdmin(actor);
+    const [queues, active, workers, inFlight] = await Promise.all([
+      queueRepo.countJobsByQueue(this.db, QUEUE_HISTORY_HOURS),
+      queueRepo.listActiveJobs(this.db, queueRepo.QUEUE_LIST_LIMIT),
+      queueRepo.listWorkers(this.db, QUEUE_HISTORY_HOURS),
+      queueRepo.listInFlightMaps(this.db, queueRepo.QUEUE_LIST_LIMIT),
+    ]);
+    return {
+      queues,
+      activeJobs: active.map(({ startedMs, ...job }) => ({ ...job, startedOn: iso(new Date(startedMs)) })),
+      workers: workers.flatMap((w) => (w.lastCellAt ? [{ ...w, lastCellAt: iso(w.lastCellAt) }] : [])),
+      inFlightMaps: inFlight.map((m) => ({ ...m, status: m.status === "running" ? "running" : "queued" })),
+    };
   }
 }
 

@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { signedInPerson, startTestApp, type TestApp } from "../../helpers/test-app";
 
@@ -96,5 +97,15 @@ describe("GET /api/admin/outbox", () => {
     expect(res.body.items[0]).toMatchObject({ subject: expect.stringContaining("Outbox Check"), html: expect.stringContaining("<a href=") });
     const filtered = await admin.client.get("/api/admin/outbox?q=reset");
     expect(filtered.body.items.map((m: { to: string }) => m.to)).toEqual([member.email]);
+  });
+});
+
+describe("GET /api/admin/queue without pg-boss", () => {
+  it("answers empty lists when no process has started pg-boss on the database", async () => {
+    const schema = await app.database.db.execute<{ present: boolean }>(sql`select to_regnamespace('pgboss') is not null as present`);
+    expect(schema.rows[0].present).toBe(false);
+    const res = await admin.client.get("/api/admin/queue");
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ queues: [], activeJobs: [], workers: [], inFlightMaps: [] });
   });
 });
