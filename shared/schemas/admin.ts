@@ -81,6 +81,8 @@ export type QueueCounts = z.infer<typeof queueCountsSchema>;
 
 /** A job a worker holds now. Map fields are null for jobs that name no map (or a deleted one). */
 export const activeJobSchema = z.object({
+  /** pg-boss job id. */
+  id: idSchema,
   queue: z.string(),
   mapId: idSchema.nullable(),
   mapTitle: z.string().nullable(),

@@ -7,6 +7,7 @@ import { RouteError } from "./layout/route-error";
 import { AdminGroupsPage, adminGroupsLoader } from "./routes/admin/admin-groups";
 import { AdminLayout } from "./routes/admin/admin-layout";
 import { AdminOutboxPage, adminOutboxLoader } from "./routes/admin/admin-outbox";
+import { AdminQueuePage, adminQueueLoader } from "./routes/admin/admin-queue";
 import { AdminUsersPage, adminUsersLoader } from "./routes/admin/admin-users";
 import { ForgotPasswordPage } from "./routes/auth/forgot-password";
 import { requireAdmin, requireUser, signedOutOnly } from "./routes/auth/guards";
@@ -91,6 +92,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                     { path: "groups", loader: adminGroupsLoader(queryClient), element: <AdminGroupsPage /> },
                     { path: "outbox", loader: adminOutboxLoader(queryClient), element: <AdminOutboxPage /> },
                     { path: "outbox/:messageId", loader: adminOutboxLoader(queryClient), element: <AdminOutboxPage /> },
+                    { path: "queue", loader: adminQueueLoader(queryClient), element: <AdminQueuePage /> },
                   ],
                 },
                 { path: "*", element: <NotFoundPage /> },

@@ -24,6 +24,7 @@ export type QueueCountRow = {
 };
 
 export type ActiveJobRow = {
+  id: string;
   queue: string;
   mapId: string | null;
   mapTitle: string | null;
@@ -72,7 +73,7 @@ export async function listActiveJobs(db: Executor, limit: number): Promise<Activ
   if (!(await hasBossSchema(db))) return [];
   const cellQueues = sql`(${FILL_CELL_QUEUE}, ${FILL_CELL_EXHAUSTED_QUEUE})`;
   const { rows } = await db.execute<ActiveJobRow>(sql`
-    select j.name as queue, m.id::text as "mapId", m.title as "mapTitle",
+    select j.id::text as id, j.name as queue, m.id::text as "mapId", m.title as "mapTitle",
       case when j.name in ${cellQueues} then (j.data->>'i')::int end as i,
       case when j.name in ${cellQueues} then (j.data->>'j')::int end as j,
       (extract(epoch from j.started_on) * 1000)::float8 as "startedMs", j.retry_count as "retryCount"

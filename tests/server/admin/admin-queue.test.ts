@@ -77,7 +77,7 @@ describe("GET /api/admin/queue", () => {
     expect(queueOf(view, "fill-cell")).toEqual({ name: "fill-cell", created: 6, retry: 1, active: 1, completed: 1, failed: 0, cancelled: 0 });
     expect(queueOf(view, "theory-row")).toMatchObject({ created: 3, active: 0 });
     expect(view.activeJobs).toEqual([
-      { queue: "fill-cell", mapId, mapTitle: "Leak sweep", i: running.data.i, j: running.data.j, startedOn: expect.any(String), retryCount: 0 },
+      { id: running.id, queue: "fill-cell", mapId, mapTitle: "Leak sweep", i: running.data.i, j: running.data.j, startedOn: expect.any(String), retryCount: 0 },
     ]);
     expect(Math.abs(Date.parse(view.activeJobs[0].startedOn) - Date.now())).toBeLessThan(60_000);
     expect(view.workers).toEqual([{ name: WORKER, cellsLastHour: 1, lastCellAt: expect.any(String) }]);

@@ -6,13 +6,14 @@ const TABS = [
   { to: "/admin/users", label: "Users" },
   { to: "/admin/groups", label: "Groups" },
   { to: "/admin/outbox", label: "Outbox" },
+  { to: "/admin/queue", label: "Queue" },
 ];
 
 /** Site administration: a heading, tabs, and the chosen panel. */
 export function AdminLayout() {
   return (
     <>
-      <PageHeader eyebrow="Admin" title="Site administration" description="Accounts and their site roles, all groups, and the e-mail the site has sent." />
+      <PageHeader eyebrow="Admin" title="Site administration" description="Accounts and their site roles, all groups, the e-mail the site has sent, and the compute queue." />
       <nav aria-label="Administration" className="mb-6 flex gap-1 border-b border-line">
         {TABS.map((tab) => (
           <NavLink

@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions } from "@tanstack/react-query";
-import { apiPaths, type AdminGroupList, type AdminUserList, type OutboxList } from "../../../../shared/schemas";
+import { apiPaths, type AdminGroupList, type AdminQueue, type AdminUserList, type OutboxList } from "../../../../shared/schemas";
 import { api } from "../../../lib/api-client";
 
 export type AdminListFilters = { q?: string; limit?: number; offset?: number };
@@ -21,7 +21,17 @@ export const adminKeys = {
   groupList: (filters: AdminListFilters) => [...adminKeys.groups(), filters] as const,
   outbox: () => [...adminKeys.all, "outbox"] as const,
   outboxList: (filters: AdminListFilters) => [...adminKeys.outbox(), filters] as const,
+  queue: () => [...adminKeys.all, "queue"] as const,
 };
+
+/** Milliseconds between refreshes of the queue view while anything waits or runs. */
+export const QUEUE_POLL_MS = 5000;
+
+/** Whether anything is waiting or running: a job not yet finished, or a map still filling. */
+export function isQueueBusy(view: AdminQueue | undefined): boolean {
+  if (!view) return false;
+  return view.inFlightMaps.length > 0 || view.activeJobs.length > 0 || view.queues.some((q) => q.created + q.retry + q.active > 0);
+}
 
 export const adminQueries = {
   users: (filters: AdminListFilters = {}) =>
@@ -42,5 +52,13 @@ export const adminQueries = {
       queryFn: ({ signal }) => api.get<OutboxList>(withQuery(apiPaths.admin.outbox, filters), { signal }),
       placeholderData: keepPreviousData,
       staleTime: 0,
+    }),
+  /** Refreshes every QUEUE_POLL_MS while the queue is busy, and not at all while it is idle. */
+  queue: () =>
+    queryOptions({
+      queryKey: adminKeys.queue(),
+      queryFn: ({ signal }) => api.get<AdminQueue>(apiPaths.admin.queue, { signal }),
+      staleTime: 0,
+      refetchInterval: (query) => (isQueueBusy(query.state.data) ? QUEUE_POLL_MS : false),
     }),
 };
