@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { cellAggregateSchema, runClassCountsSchema, traceSchema } from "./cell-result";
+import { cellAggregateSchema, equilibriumSummarySchema, runClassCountsSchema, traceSchema } from "./cell-result";
 import { idSchema, timestampSchema } from "./common";
 import { nonlinearitySchema } from "./maps";
 
@@ -91,20 +91,9 @@ export const probeAccessSchema = z.enum(["owner", "editor", "viewer"]);
 export type ProbeAccess = z.infer<typeof probeAccessSchema>;
 
 /** One distinct equilibrium of the uploaded matrix (the state vector is downloaded apart). */
-export const probeEquilibriumSchema = z.object({
+export const probeEquilibriumSchema = equilibriumSummarySchema.extend({
   /** Position in the list; the download route takes it. */
   e: z.number().int().nonnegative(),
-  normInf: z.number().nonnegative(),
-  /** ‖x*‖₂/√N. */
-  normRms: z.number().nonnegative(),
-  /** Unstable directions (eigenvalues of the Jacobian with Re λ > 0). */
-  index: z.number().int().nonnegative(),
-  maxRealPart: z.number(),
-  stable: z.boolean(),
-  residual: z.number().nonnegative(),
-  hits: z.number().int().nonnegative(),
-  basinShare: z.number().min(0).max(1),
-  meanSettleTime: z.number().nonnegative().nullable(),
 });
 export type ProbeEquilibrium = z.infer<typeof probeEquilibriumSchema>;
 
