@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Installs what is missing on a fresh machine: npm packages (npm ci when the lock changed),
-# Debian's postgresql server, and (for tests) Debian's chromium. Safe to run every time.
+# Debian's postgresql server, and (for tests) Debian's chromium and poppler-utils. Safe to run every time.
 set -euo pipefail
 ROOT=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
 
