@@ -2,7 +2,7 @@ import { readFile } from "node:fs/promises";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_PASSWORD, demoPeople } from "../../server/db/seed/demo-lab";
-import { launchBrowser, screenshot, type Browser } from "../helpers/browser";
+import { launchBrowser, screenshot, signInThroughForm, type Browser } from "../helpers/browser";
 import { startE2eApp, type E2eApp } from "../helpers/e2e-app";
 
 // The map journey in Debian's chromium against the real app, queue and an in-process worker:
@@ -43,11 +43,7 @@ describe("map journey in chromium", () => {
   });
 
   it("signs in with a demo account and opens the new-map form from home", async () => {
-    await page.goto(`${app.baseUrl}/sign-in`);
-    await page.getByLabel("E-mail").fill(editor.email);
-    await page.getByLabel("Password").fill(DEMO_PASSWORD);
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await page.waitForURL(`${app.baseUrl}/`);
+    await signInThroughForm(page, app.baseUrl, editor.email, DEMO_PASSWORD);
     await page.getByRole("link", { name: "New map" }).first().click();
     await page.waitForURL("**/maps/new");
     await expect.poll(() => page.getByRole("heading", { name: "New map", level: 1 }).isVisible()).toBe(true);

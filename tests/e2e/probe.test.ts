@@ -3,7 +3,7 @@ import path from "node:path";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_PASSWORD, demoPeople } from "../../server/db/seed/demo-lab";
-import { DESKTOP, launchBrowser, PHONE, screenshot, type Browser } from "../helpers/browser";
+import { DESKTOP, launchBrowser, PHONE, screenshot, signInThroughForm, type Browser } from "../helpers/browser";
 import { startE2eApp, type E2eApp } from "../helpers/e2e-app";
 
 // The probe journey in Debian's chromium against the real app, queue and an in-process worker:
@@ -53,11 +53,7 @@ describe("probe journey in chromium", () => {
   });
 
   it("signs in, creates a rate map, and opens Probe from the navigation", async () => {
-    await page.goto(`${app.baseUrl}/sign-in`);
-    await page.getByLabel("E-mail").fill(editor.email);
-    await page.getByLabel("Password").fill(DEMO_PASSWORD);
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await page.waitForURL(`${app.baseUrl}/`);
+    await signInThroughForm(page, app.baseUrl, editor.email, DEMO_PASSWORD);
     await createRateMap(page);
     await page.getByRole("navigation", { name: "Main" }).first().getByRole("link", { name: "Probe" }).click();
     await page.waitForURL("**/probes");

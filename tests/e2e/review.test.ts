@@ -4,7 +4,7 @@ import path from "node:path";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_PASSWORD, demoPeople } from "../../server/db/seed/demo-lab";
-import { DESKTOP, launchBrowser, PHONE, screenshot, SCREENSHOT_DIR, type Browser } from "../helpers/browser";
+import { DESKTOP, launchBrowser, PHONE, screenshot, SCREENSHOT_DIR, signInThroughForm, type Browser } from "../helpers/browser";
 import { startE2eApp, type E2eApp } from "../helpers/e2e-app";
 
 // The reviewer's journey in Debian's chromium against the real app, queue and worker: the demo
@@ -41,11 +41,7 @@ describe("review journey in chromium", () => {
     rateId = seeded.find((m) => m.title.includes("rate network"))!.id;
     browser = await launchBrowser();
     page = await browser.newPage();
-    await page.goto(`${app.baseUrl}/sign-in`);
-    await page.getByLabel("E-mail").fill(editor.email);
-    await page.getByLabel("Password").fill(DEMO_PASSWORD);
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await page.waitForURL(`${app.baseUrl}/`);
+    await signInThroughForm(page, app.baseUrl, editor.email, DEMO_PASSWORD);
     // The field demo map would keep the one engine thread busy for a minute: stop it.
     const field = seeded.find((m) => m.title.includes("field network"))!.id;
     expect((await page.request.post(`${app.baseUrl}/api/maps/${field}/cancel`)).status()).toBe(200);

@@ -73,3 +73,12 @@ export async function screenshot(page: Page, name: string, widths: ReadonlyArray
   }
   if (original) await page.setViewportSize(original);
 }
+
+/** Signs in through the sign-in page as a person would and waits for home. */
+export async function signInThroughForm(page: Page, baseUrl: string, email: string, password: string): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL(`${baseUrl}/`);
+}
