@@ -1,8 +1,10 @@
-import { configure, render } from "@testing-library/react";
+import { cleanup, configure, render } from "@testing-library/react";
 import { createMemoryRouter, RouterProvider } from "react-router-dom";
 import { AppProvider, createAppQueryClient } from "../../src/app/provider";
 import { createRoutes } from "../../src/app/router";
 import { resetToasts } from "../../src/lib/toast-store";
+import { afterAll, afterEach, beforeAll } from "vitest";
+import { startTestApp, type TestApp, type TestAppOptions } from "./test-app";
 
 const nodeFetch = globalThis.fetch;
 
@@ -50,4 +52,29 @@ export function renderApp(path: string) {
     </AppProvider>,
   );
   return { ...view, router, queryClient, location: () => router.state.location };
+}
+
+/**
+ * The real test server for a file of client route tests: started before its tests, stopped
+ * after them; after each test the rendered tree is unmounted and `fetch` goes back to Node's
+ * own (undoing any routeFetchTo). Read `served.app` inside tests.
+ */
+export function useServedClient(options?: TestAppOptions): { readonly app: TestApp } {
+  let app: TestApp | undefined;
+  beforeAll(async () => {
+    app = await startTestApp(options);
+  });
+  afterAll(async () => {
+    await app?.stop();
+  });
+  afterEach(() => {
+    cleanup();
+    globalThis.fetch = nodeFetch;
+  });
+  return {
+    get app() {
+      if (!app) throw new Error("the test server is not running (use served.app inside a test)");
+      return app;
+    },
+  };
 }

@@ -1,33 +1,21 @@
 // @vitest-environment jsdom
-import { cleanup, screen, within } from "@testing-library/react";
+import { screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { isQueueBusy } from "../../src/features/admin/api/admin-queries";
 import { FILL_CELL_QUEUE, type FillCellPayload } from "../../server/queue/queues";
-import { renderApp, routeFetchTo } from "../helpers/client-harness";
-import { signedInPerson, startTestApp, type TestApp } from "../helpers/test-app";
+import { renderApp, routeFetchTo, useServedClient } from "../helpers/client-harness";
+import { signedInPerson } from "../helpers/test-app";
 import { rateBody } from "../server/maps/maps-fixtures";
 
 // The admin Queue page against the real server and pg-boss (no worker runs; the test takes a
 // job from pg-boss itself so one shows as running).
 
-let app: TestApp;
-let undoFetch: () => void;
-
-beforeAll(async () => {
-  app = await startTestApp({ queue: true });
-});
-afterAll(async () => {
-  await app?.stop();
-});
-afterEach(() => {
-  cleanup();
-  undoFetch?.();
-});
+const served = useServedClient({ queue: true });
 
 async function admin() {
-  const person = await signedInPerson(app, "admin");
-  await app.makeAdmin(person.email);
+  const person = await signedInPerson(served.app, "admin");
+  await served.app.makeAdmin(person.email);
   return person;
 }
 
@@ -39,7 +27,7 @@ function rowOf(tableName: string, text: string): HTMLElement {
 describe("admin queue page", () => {
   it("opens from the admin tabs and shows the idle state with every queue at zero", async () => {
     const boss = await admin();
-    undoFetch = routeFetchTo(app.baseUrl, boss.client.jar);
+    routeFetchTo(served.app.baseUrl, boss.client.jar);
     const view = renderApp("/admin/users");
     const user = userEvent.setup();
     await user.click(await screen.findByRole("link", { name: "Queue" }));
@@ -53,10 +41,10 @@ describe("admin queue page", () => {
 
   it("lists a waiting map, then shows its running job after the next refresh", async () => {
     const boss = await admin();
-    const owner = await signedInPerson(app, "owner");
+    const owner = await signedInPerson(served.app, "owner");
     const created = await owner.client.post("/api/maps", rateBody({ title: "Queue page sweep" }));
     expect(created.status).toBe(201);
-    undoFetch = routeFetchTo(app.baseUrl, boss.client.jar);
+    routeFetchTo(served.app.baseUrl, boss.client.jar);
     renderApp("/admin/queue");
     const mapRow = await screen.findByRole("row", { name: /Queue page sweep/ });
     expect(within(mapRow).getByText(owner.name)).toBeTruthy();
@@ -66,7 +54,7 @@ describe("admin queue page", () => {
 
     // Let the mount's own refetch finish, so the running job can only arrive by the 5 s poll.
     await new Promise((r) => setTimeout(r, 1000));
-    const [job] = await app.boss!.fetch<FillCellPayload>(FILL_CELL_QUEUE);
+    const [job] = await served.app.boss!.fetch<FillCellPayload>(FILL_CELL_QUEUE);
     const fetchedAt = Date.now();
     const running = await screen.findByRole("table", { name: "Running jobs" }, { timeout: 12_000 });
     expect(Date.now() - fetchedAt).toBeGreaterThan(2000);

@@ -1,30 +1,17 @@
 // @vitest-environment jsdom
-import { cleanup, render, screen, waitFor } from "@testing-library/react";
+import { render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { useForm } from "react-hook-form";
-import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { apiPaths, type Register } from "../../shared/schemas";
 import { api, ApiError } from "../../src/lib/api-client";
 import { applyServerError } from "../../src/lib/form-errors";
 import { safeNext, withNext } from "../../src/lib/safe-next";
-import { routeFetchTo } from "../helpers/client-harness";
-import { startTestApp, type TestApp } from "../helpers/test-app";
+import { routeFetchTo, useServedClient } from "../helpers/client-harness";
 
 // The client's request layer and form error mapping, fed by real answers of the real server.
 
-let app: TestApp;
-let undoFetch: () => void;
-
-beforeAll(async () => {
-  app = await startTestApp();
-});
-afterAll(async () => {
-  await app?.stop();
-});
-afterEach(() => {
-  cleanup();
-  undoFetch?.();
-});
+const served = useServedClient();
 
 async function failure(promise: Promise<unknown>): Promise<ApiError> {
   const error = await promise.then(
@@ -37,7 +24,7 @@ async function failure(promise: Promise<unknown>): Promise<ApiError> {
 
 describe("api-client", () => {
   it("turns the server's error body into a typed ApiError", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     const unauth = await failure(api.get(apiPaths.auth.me));
     expect([unauth.status, unauth.code]).toEqual([401, "UNAUTHENTICATED"]);
     const missing = await failure(api.get("/api/no-such-route"));
@@ -45,14 +32,14 @@ describe("api-client", () => {
   });
 
   it("carries 422 field issues with dotted paths", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     const invalid = await failure(api.post(apiPaths.auth.register, { email: "nope", password: "x", name: "" }));
     expect(invalid.status).toBe(422);
     expect(invalid.issues.map((i) => i.path).sort((a, b) => a.localeCompare(b))).toEqual(["email", "name", "password"]);
   });
 
   it("reports an unreachable server as a network failure, not a crash", async () => {
-    undoFetch = routeFetchTo("http://127.0.0.1:9"); // port 9 (discard) has no listener here
+    routeFetchTo("http://127.0.0.1:9"); // port 9 (discard) has no listener here
     const offline = await failure(api.get(apiPaths.health));
     expect([offline.status, offline.code]).toEqual([0, "network"]);
   });
@@ -77,7 +64,7 @@ function ServerErrorForm({ error }: { error: unknown }) {
 
 describe("applyServerError", () => {
   it("puts a real 422's issues on their fields and the rest on the form", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     const invalid = await failure(api.post(apiPaths.auth.register, { email: "nope", password: "x", name: "" }));
     render(<ServerErrorForm error={invalid} />);
     await userEvent.click(screen.getByRole("button", { name: "Send" }));
@@ -89,7 +76,7 @@ describe("applyServerError", () => {
   });
 
   it("puts the duplicate-address answer (409 with an e-mail issue) on the e-mail field", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     const person = { email: "twice@lab.example", password: "long-enough-password", name: "Twice" };
     await api.post(apiPaths.auth.register, person);
     const conflict = await failure(api.post(apiPaths.auth.register, person));
@@ -103,7 +90,7 @@ describe("applyServerError", () => {
   });
 
   it("puts an answer without issues (401 wrong password) on the form", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     const wrong = await failure(api.post(apiPaths.auth.login, { email: "nobody@lab.example", password: "whatever-it-is" }));
     expect([wrong.status, wrong.issues]).toEqual([401, []]);
     render(<ServerErrorForm error={wrong} />);

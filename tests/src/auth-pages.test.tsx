@@ -1,30 +1,18 @@
 // @vitest-environment jsdom
 import { cleanup, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
-import { renderApp, routeFetchTo } from "../helpers/client-harness";
-import { newPerson, signedInPerson, startTestApp, type TestApp } from "../helpers/test-app";
+import { describe, expect, it } from "vitest";
+import { renderApp, routeFetchTo, useServedClient } from "../helpers/client-harness";
+import { newPerson, signedInPerson } from "../helpers/test-app";
 
 // The signed-out pages against the real server: redirects, client-side validation with the
 // shared zod schemas, and server answers shown where the person looks.
 
-let app: TestApp;
-let undoFetch: () => void;
-
-beforeAll(async () => {
-  app = await startTestApp();
-});
-afterAll(async () => {
-  await app?.stop();
-});
-afterEach(() => {
-  cleanup();
-  undoFetch?.();
-});
+const served = useServedClient();
 
 describe("sign-in guard", () => {
   it("sends a signed-out visitor of /groups to sign in, remembering where they were going", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     const view = renderApp("/groups");
     expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
     expect(view.location().pathname).toBe("/sign-in");
@@ -32,9 +20,9 @@ describe("sign-in guard", () => {
   });
 
   it("returns to the remembered page after signing in", async () => {
-    const person = await signedInPerson(app, "guard");
+    const person = await signedInPerson(served.app, "guard");
     await person.client.post("/api/auth/logout");
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     const view = renderApp("/sign-in?next=%2Fgroups");
     const user = userEvent.setup();
     await user.type(await screen.findByLabelText("E-mail"), person.email);
@@ -45,8 +33,8 @@ describe("sign-in guard", () => {
   });
 
   it("ignores a next= that points off the site", async () => {
-    const person = await signedInPerson(app, "offsite");
-    undoFetch = routeFetchTo(app.baseUrl, person.client.jar);
+    const person = await signedInPerson(served.app, "offsite");
+    routeFetchTo(served.app.baseUrl, person.client.jar);
     const view = renderApp("/sign-in?next=%2F%2Fevil.example%2F");
     // Already signed in: the sign-in loader forwards to the safe fallback, home.
     expect(await screen.findByRole("heading", { name: /^Welcome/ })).toBeTruthy();
@@ -56,7 +44,7 @@ describe("sign-in guard", () => {
 
 describe("register", () => {
   it("shows the shared schema's messages before sending anything", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     renderApp("/register");
     const user = userEvent.setup();
     await user.type(await screen.findByLabelText("E-mail"), "not-an-address");
@@ -70,7 +58,7 @@ describe("register", () => {
   });
 
   it("creates the account, signs it in and lands on home", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     const person = newPerson("reg");
     const view = renderApp("/register");
     const user = userEvent.setup();
@@ -80,13 +68,13 @@ describe("register", () => {
     await user.click(screen.getByRole("button", { name: "Create account" }));
     expect(await screen.findByRole("heading", { name: "Welcome, Maren" })).toBeTruthy();
     expect(view.location().pathname).toBe("/");
-    const me = await app.client().post("/api/auth/login", { email: person.email, password: person.password });
+    const me = await served.app.client().post("/api/auth/login", { email: person.email, password: person.password });
     expect(me.status).toBe(200);
   });
 
   it("puts the server's duplicate-address answer on the form", async () => {
-    const existing = await signedInPerson(app, "dup");
-    undoFetch = routeFetchTo(app.baseUrl);
+    const existing = await signedInPerson(served.app, "dup");
+    routeFetchTo(served.app.baseUrl);
     renderApp("/register");
     const user = userEvent.setup();
     await user.type(await screen.findByLabelText("Name"), "Second Try");
@@ -100,8 +88,8 @@ describe("register", () => {
 
 describe("sign in with a wrong password", () => {
   it("says so without revealing whether the account exists", async () => {
-    const person = await signedInPerson(app, "wrongpw");
-    undoFetch = routeFetchTo(app.baseUrl);
+    const person = await signedInPerson(served.app, "wrongpw");
+    routeFetchTo(served.app.baseUrl);
     renderApp("/sign-in");
     const user = userEvent.setup();
     await user.type(await screen.findByLabelText("E-mail"), person.email);
@@ -120,20 +108,20 @@ describe("sign in with a wrong password", () => {
 
 describe("password reset", () => {
   it("asks for the e-mailed link when /reset has no token", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     renderApp("/reset");
     expect(await screen.findByText(/needs the link from your reset e-mail/)).toBeTruthy();
   });
 
   it("requests a link, then sets a new password with the token from the outbox", async () => {
-    const person = await signedInPerson(app, "reset");
-    undoFetch = routeFetchTo(app.baseUrl);
+    const person = await signedInPerson(served.app, "reset");
+    routeFetchTo(served.app.baseUrl);
     renderApp("/forgot-password");
     const user = userEvent.setup();
     await user.type(await screen.findByLabelText("E-mail"), person.email);
     await user.click(screen.getByRole("button", { name: "Send reset link" }));
     expect(await screen.findByText(/a reset link is on its way/)).toBeTruthy();
-    const mail = await app.lastMailTo(person.email);
+    const mail = await served.app.lastMailTo(person.email);
     const link = /\/reset\?token=[^\s]+/.exec(mail.text)?.[0];
     expect(link).toBeTruthy();
     cleanup();
@@ -141,7 +129,7 @@ describe("password reset", () => {
     await user.type(await screen.findByLabelText("New password"), "a-brand-new-password");
     await user.click(screen.getByRole("button", { name: "Set new password" }));
     await waitFor(() => expect(view.location().pathname).toBe("/sign-in"));
-    const login = await app.client().post("/api/auth/login", { email: person.email, password: "a-brand-new-password" });
+    const login = await served.app.client().post("/api/auth/login", { email: person.email, password: "a-brand-new-password" });
     expect(login.status).toBe(200);
   });
 });

@@ -1,42 +1,30 @@
 // @vitest-environment jsdom
-import { cleanup, screen, waitFor, within } from "@testing-library/react";
+import { screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
-import { renderApp, routeFetchTo } from "../helpers/client-harness";
-import { signedInPerson, startTestApp, tokenFromMail, type TestApp } from "../helpers/test-app";
+import { describe, expect, it } from "vitest";
+import { renderApp, routeFetchTo, useServedClient } from "../helpers/client-harness";
+import { signedInPerson, tokenFromMail } from "../helpers/test-app";
 
 // Group pages against the real server: create, invite, roles as each member sees them,
 // the invitation page signed out and signed in, and a group that is not yours.
 
-let app: TestApp;
-let undoFetch: () => void;
-
-beforeAll(async () => {
-  app = await startTestApp();
-});
-afterAll(async () => {
-  await app?.stop();
-});
-afterEach(() => {
-  cleanup();
-  undoFetch?.();
-});
+const served = useServedClient();
 
 async function groupWithViewer() {
-  const owner = await signedInPerson(app, "owner");
-  const viewer = await signedInPerson(app, "viewer");
+  const owner = await signedInPerson(served.app, "owner");
+  const viewer = await signedInPerson(served.app, "viewer");
   const created = await owner.client.post("/api/groups", { name: "Hollow basin reading group" });
   const groupId = created.body.id as string;
   await owner.client.post(`/api/groups/${groupId}/invites`, { email: viewer.email, role: "viewer" });
-  const token = tokenFromMail((await app.lastMailTo(viewer.email)).text, "invite");
+  const token = tokenFromMail((await served.app.lastMailTo(viewer.email)).text, "invite");
   await viewer.client.post(`/api/invites/${token}/accept`);
   return { owner, viewer, groupId };
 }
 
 describe("groups list", () => {
   it("shows the empty state, then the group just created", async () => {
-    const person = await signedInPerson(app, "lister");
-    undoFetch = routeFetchTo(app.baseUrl, person.client.jar);
+    const person = await signedInPerson(served.app, "lister");
+    routeFetchTo(served.app.baseUrl, person.client.jar);
     renderApp("/groups");
     expect(await screen.findByText("No groups yet")).toBeTruthy();
     const user = userEvent.setup();
@@ -48,8 +36,8 @@ describe("groups list", () => {
   });
 
   it("rejects an empty name with the shared schema's message", async () => {
-    const person = await signedInPerson(app, "blank");
-    undoFetch = routeFetchTo(app.baseUrl, person.client.jar);
+    const person = await signedInPerson(served.app, "blank");
+    routeFetchTo(served.app.baseUrl, person.client.jar);
     renderApp("/groups");
     const user = userEvent.setup();
     await user.click(await screen.findByRole("button", { name: "Create group" }));
@@ -60,7 +48,7 @@ describe("groups list", () => {
 describe("group detail", () => {
   it("lets the owner invite, and lists the pending invitation", async () => {
     const { owner, groupId } = await groupWithViewer();
-    undoFetch = routeFetchTo(app.baseUrl, owner.client.jar);
+    routeFetchTo(served.app.baseUrl, owner.client.jar);
     renderApp(`/groups/${groupId}`);
     const user = userEvent.setup();
     await user.type(await screen.findByLabelText("E-mail address"), "newcomer@lab.example");
@@ -69,12 +57,12 @@ describe("group detail", () => {
     const pending = await screen.findByText("newcomer@lab.example");
     const row = pending.closest("li")!;
     expect(within(row).getByText("Editor")).toBeTruthy();
-    expect((await app.lastMailTo("newcomer@lab.example")).subject).toMatch(/Hollow basin reading group/);
+    expect((await served.app.lastMailTo("newcomer@lab.example")).subject).toMatch(/Hollow basin reading group/);
   });
 
   it("changes a member's role through the owner's picker", async () => {
     const { owner, viewer, groupId } = await groupWithViewer();
-    undoFetch = routeFetchTo(app.baseUrl, owner.client.jar);
+    routeFetchTo(served.app.baseUrl, owner.client.jar);
     renderApp(`/groups/${groupId}`);
     const user = userEvent.setup();
     await user.selectOptions(await screen.findByLabelText(`Role of ${viewer.name}`), "editor");
@@ -86,7 +74,7 @@ describe("group detail", () => {
 
   it("shows a viewer the members but no invite form or role pickers", async () => {
     const { viewer, owner, groupId } = await groupWithViewer();
-    undoFetch = routeFetchTo(app.baseUrl, viewer.client.jar);
+    routeFetchTo(served.app.baseUrl, viewer.client.jar);
     renderApp(`/groups/${groupId}`);
     expect(await screen.findByRole("heading", { name: "Hollow basin reading group", level: 1 })).toBeTruthy();
     expect(screen.getByText(owner.name)).toBeTruthy();
@@ -97,8 +85,8 @@ describe("group detail", () => {
 
   it("answers someone else's group with the not-found page inside the shell", async () => {
     const { groupId } = await groupWithViewer();
-    const stranger = await signedInPerson(app, "stranger");
-    undoFetch = routeFetchTo(app.baseUrl, stranger.client.jar);
+    const stranger = await signedInPerson(served.app, "stranger");
+    routeFetchTo(served.app.baseUrl, stranger.client.jar);
     renderApp(`/groups/${groupId}`);
     expect(await screen.findByText("Nothing here")).toBeTruthy();
     expect(screen.getAllByRole("navigation", { name: "Main" }).length).toBeGreaterThan(0);
@@ -106,7 +94,7 @@ describe("group detail", () => {
 
   it("leaves the group and returns to the list", async () => {
     const { viewer, groupId } = await groupWithViewer();
-    undoFetch = routeFetchTo(app.baseUrl, viewer.client.jar);
+    routeFetchTo(served.app.baseUrl, viewer.client.jar);
     const view = renderApp(`/groups/${groupId}`);
     const user = userEvent.setup();
     await user.click(await screen.findByRole("button", { name: "Leave group" }));
@@ -118,15 +106,15 @@ describe("group detail", () => {
 
 describe("invitation page", () => {
   async function pendingInvite() {
-    const owner = await signedInPerson(app, "inviter");
+    const owner = await signedInPerson(served.app, "inviter");
     const created = await owner.client.post("/api/groups", { name: "Limit cycle lunch" });
     await owner.client.post(`/api/groups/${created.body.id}/invites`, { email: "guest@lab.example", role: "viewer" });
-    return tokenFromMail((await app.lastMailTo("guest@lab.example")).text, "invite");
+    return tokenFromMail((await served.app.lastMailTo("guest@lab.example")).text, "invite");
   }
 
   it("offers sign-in and registration to a signed-out visitor, coming back afterwards", async () => {
     const token = await pendingInvite();
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     renderApp(`/invites/${token}`);
     expect(await screen.findByText("Limit cycle lunch")).toBeTruthy();
     const signIn = screen.getByRole("link", { name: "Sign in to accept" });
@@ -138,15 +126,15 @@ describe("invitation page", () => {
 
   it("warns a signed-in account whose address differs", async () => {
     const token = await pendingInvite();
-    const other = await signedInPerson(app, "other");
-    undoFetch = routeFetchTo(app.baseUrl, other.client.jar);
+    const other = await signedInPerson(served.app, "other");
+    routeFetchTo(served.app.baseUrl, other.client.jar);
     renderApp(`/invites/${token}`);
     expect(await screen.findByText(/This invitation was sent to guest@lab.example/)).toBeTruthy();
     expect(screen.getByRole("button", { name: "Switch account" })).toBeTruthy();
   });
 
   it("shows a broken link as not found", async () => {
-    undoFetch = routeFetchTo(app.baseUrl);
+    routeFetchTo(served.app.baseUrl);
     renderApp(`/invites/${"x".repeat(32)}`);
     expect(await screen.findByText("Nothing here")).toBeTruthy();
   });
