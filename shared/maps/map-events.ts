@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { mapStatusSchema } from "../schemas/maps";
+import { mapSchema, mapStatusSchema } from "../schemas/maps";
 
 /**
  * Server-sent events of GET /api/maps/:id/events (live fill-in). Each SSE message has an
@@ -14,21 +14,13 @@ import { mapStatusSchema } from "../schemas/maps";
 export const MAP_EVENT_NAMES = ["cell", "progress", "status"] as const;
 export type MapEventName = (typeof MAP_EVENT_NAMES)[number];
 
-export const mapProgressSchema = z.object({
-  mapId: z.uuid(),
-  status: mapStatusSchema,
-  failure: z.string().nullable(),
-  cellsTotal: z.number().int(),
-  cellsDone: z.number().int(),
-  cellsComputed: z.number().int(),
-  cellsFromCache: z.number().int(),
-  /** Cells computed per minute (recent window, as in the map view); null before any. */
-  throughput: z.number().nullable(),
-  /** Seconds left at that throughput: 0 when done, null when stopped or not yet known. */
-  etaSeconds: z.number().nullable(),
-  startedAt: z.string().nullable(),
-  finishedAt: z.string().nullable(),
-});
+/** The map's progress fields as in the map view (throughput and ETA over the same recent window). */
+export const mapProgressSchema = mapSchema
+  .pick({
+    status: true, failure: true, cellsTotal: true, cellsDone: true, cellsComputed: true, cellsFromCache: true,
+    throughput: true, etaSeconds: true, startedAt: true, finishedAt: true,
+  })
+  .extend({ mapId: z.uuid() });
 export type MapProgress = z.infer<typeof mapProgressSchema>;
 
 export const mapStatusEventSchema = z.object({ status: mapStatusSchema, failure: z.string().nullable() });
